@@ -1,0 +1,72 @@
+package org.trimwright.engine.design;
+
+import java.util.List;
+import java.util.Optional;
+
+import org.trimwright.engine.coding.CodeMap;
+import org.trimwright.engine.coding.CodingScheme;
+import org.trimwright.engine.coding.FieldCoding;
+import org.trimwright.engine.coding.StepTable;
+import org.trimwright.engine.glitch.GlitchAnalysis;
+import org.trimwright.engine.logic.DecoderCost;
+import org.trimwright.engine.logic.DecoderSynthesis;
+import org.trimwright.engine.logic.GateLibrary;
+import org.trimwright.engine.logic.Netlist;
+import org.trimwright.engine.logic.OutputFunctions;
+import org.trimwright.engine.units.SiUnit;
+import org.trimwright.engine.units.SiValue;
+
+/**
+ * Entry point of the coding engine: step table, decoder netlist and cost, glitch exposure and Verilog of one
+ * field. Stateless and thread-safe.
+ */
+public final class CodingAnalysis {
+
+    private CodingAnalysis() {
+    }
+
+    /**
+     * Analyses one field.
+     *
+     * @param name   field name (used for Verilog module names after sanitising)
+     * @param coding the field's coding
+     * @param atZero value at signed step count 0, in {@code unit}
+     * @param step   value of one step (LSB), in {@code unit}; may be negative for a falling trim
+     * @param unit   unit of the values
+     * @param lib    gate library for the decoder
+     */
+    public static CodingReport analyze(String name, FieldCoding coding, double atZero, double step, SiUnit unit,
+            GateLibrary lib) {
+        if (coding == null || unit == null || lib == null) {
+            throw new IllegalArgumentException("coding, unit and gate library are required");
+        }
+        CodeMap map = new CodeMap(coding);
+        StepTable table = new StepTable(map, atZero, step);
+        Netlist netlist = DecoderSynthesis.netlist(map, lib);
+        DecoderCost cost = DecoderCost.of(netlist, map.unitElements(), DecoderSynthesis.STRUCTURAL_METHOD);
+        Optional<DecoderCost> twoLevel = Optional.empty();
+        if (coding.bits() <= OutputFunctions.TWO_LEVEL_LIMIT) {
+            twoLevel = Optional.of(DecoderCost.of(DecoderSynthesis.twoLevelNetlist(map, lib), map.unitElements(),
+                    "counted from the netlist of the exact minimum sums of products (Quine-McCluskey), mapped"
+                            + " NAND-NAND with shared products and fan-in decomposition"));
+        }
+        List<DecoderCost> splits = coding.scheme() == CodingScheme.SEGMENTED
+                ? DecoderSynthesis.costPerSplit(coding, lib) : List.of();
+        return new CodingReport(name, coding, unit, table, netlist, cost, twoLevel, splits,
+                GlitchAnalysis.analyse(map, step));
+    }
+
+    /**
+     * Analyses one field with values given as SI values (e.g. {@code SiValue.parse("1.2V")}). The units of
+     * {@code atZero} and {@code step} must agree; a unitless zero takes the step's unit.
+     */
+    public static CodingReport analyze(String name, FieldCoding coding, SiValue atZero, SiValue step,
+            GateLibrary lib) {
+        SiUnit unit = step.unit();
+        if (atZero.unit() != unit && !(atZero.unit() == SiUnit.NONE && atZero.value() == 0)) {
+            throw new IllegalArgumentException("at-zero value " + atZero + " and step " + step
+                    + " have different units");
+        }
+        return analyze(name, coding, atZero.value(), step.value(), unit, lib);
+    }
+}
