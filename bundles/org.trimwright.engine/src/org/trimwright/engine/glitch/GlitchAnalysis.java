@@ -11,7 +11,8 @@ import org.trimwright.engine.coding.CodeMap;
  * Computes the glitch exposure of every adjacent step of a field (see {@link GlitchStep} for the definition).
  * <p>Method: exact enumeration of all 2^t - 2 intermediate codes of a step that toggles t bits, the value taken
  * through the code map (the decoder's function; hazards inside the decoder logic are not modelled). Codes are
- * ordered by signed step count, ties (the two zeros of sign-magnitude) by code. The work is the sum over steps of
+ * ordered by signed step count; the only ties, the two zeros of sign-magnitude, put the negative zero (sign bit
+ * set, the larger code) first, so stepping -1, -0, +0, +1 toggles one register bit per step. The work is the sum over steps of
  * 2^t, about n * 2^n for a binary-ordered field, so 16-bit fields are enumerated exactly too.
  */
 public final class GlitchAnalysis {
@@ -23,7 +24,7 @@ public final class GlitchAnalysis {
     public static GlitchReport analyse(CodeMap map, double step) {
         int n = map.coding().codeCount();
         int[] order = IntStream.range(0, n).boxed()
-                .sorted(Comparator.comparingInt(map::signedSteps).thenComparingInt(c -> c))
+                .sorted(Comparator.comparingInt(map::signedSteps).thenComparingInt(c -> -c))
                 .mapToInt(Integer::intValue).toArray();
         List<GlitchStep> steps = new ArrayList<>(n - 1);
         for (int k = 0; k + 1 < n; k++) {
