@@ -22,6 +22,13 @@ import org.trimwright.engine.units.SiValue;
  */
 public final class CodingAnalysis {
 
+    /**
+     * Widest field whose report includes the two-level (minimum SOP) cost; wider fields can still be minimised
+     * up to {@link OutputFunctions#TWO_LEVEL_LIMIT} bits through {@link OutputFunctions#minimised()}. The limit
+     * keeps one analysis of a field in milliseconds (an 8-bit select decoder takes about half a second).
+     */
+    public static final int TWO_LEVEL_BITS = 6;
+
     private CodingAnalysis() {
     }
 
@@ -45,7 +52,7 @@ public final class CodingAnalysis {
         Netlist netlist = DecoderSynthesis.netlist(map, lib);
         DecoderCost cost = DecoderCost.of(netlist, map.unitElements(), DecoderSynthesis.STRUCTURAL_METHOD);
         Optional<DecoderCost> twoLevel = Optional.empty();
-        if (coding.bits() <= OutputFunctions.TWO_LEVEL_LIMIT) {
+        if (coding.bits() <= TWO_LEVEL_BITS) {
             twoLevel = Optional.of(DecoderCost.of(DecoderSynthesis.twoLevelNetlist(map, lib), map.unitElements(),
                     "counted from the netlist of the exact minimum sums of products (Quine-McCluskey), mapped"
                             + " NAND-NAND with shared products and fan-in decomposition"));

@@ -24,7 +24,7 @@ import org.trimwright.engine.units.SiUnit;
  * @param netlist      the structural gate netlist of the decoder
  * @param cost         cost of the structural decoder
  * @param twoLevelCost cost of the minimum two-level (SOP, NAND-NAND) realisation with shared products, fields up
- *                     to 8 bits; empty beyond
+ *                     to {@link CodingAnalysis#TWO_LEVEL_BITS} bits; empty beyond
  * @param splitCosts   segmented fields: cost for every split M = 0..n (index M; M = 0 binary, M = n thermometer);
  *                     empty list for other schemes
  * @param glitch       glitch exposure of every adjacent step, the worst one, and advice

@@ -13,11 +13,12 @@ import java.util.Map;
  * @param switches        analog switches, one per decoder output
  * @param unitElements    unit elements of the array, 2^w - 1
  * @param decoderOutputs  number of decoder outputs
- * @param estimated       false: counted from a synthesised gate netlist; true: not synthesised, see method
- * @param method          how the counts were obtained
+ * @param method          how the counts were obtained (every count is taken from a synthesised netlist: the
+ *                        structures grow linearly with the outputs, so all widths 1..16 are synthesised and no
+ *                        count is an estimate)
  */
 public record DecoderCost(Map<GateType, Integer> gates, int transistors, double nand2Equivalent, int switches,
-        int unitElements, int decoderOutputs, boolean estimated, String method) {
+        int unitElements, int decoderOutputs, String method) {
 
     public DecoderCost {
         gates = Collections.unmodifiableMap(new EnumMap<>(gates));
@@ -32,6 +33,6 @@ public record DecoderCost(Map<GateType, Integer> gates, int transistors, double 
     public static DecoderCost of(Netlist netlist, int unitElements, String method) {
         int t = netlist.transistors();
         int outputs = netlist.outputNets().size();
-        return new DecoderCost(netlist.gateCounts(), t, t / 4.0, outputs, unitElements, outputs, false, method);
+        return new DecoderCost(netlist.gateCounts(), t, t / 4.0, outputs, unitElements, outputs, method);
     }
 }

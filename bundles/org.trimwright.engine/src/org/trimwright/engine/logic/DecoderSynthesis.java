@@ -31,7 +31,10 @@ public final class DecoderSynthesis {
         return n;
     }
 
-    /** The two-level netlist (minimum SOPs mapped NAND-NAND with shared products); fields up to 8 bits. */
+    /**
+     * The two-level netlist (minimum SOPs mapped NAND-NAND with shared products, products wider than the gate
+     * fan-in decomposed); fields up to {@link OutputFunctions#TWO_LEVEL_LIMIT} bits.
+     */
     public static Netlist twoLevelNetlist(CodeMap map, GateLibrary lib) {
         ExprFactory f = new ExprFactory();
         List<Expr> outputs = OutputFunctions.asExpressions(f, new OutputFunctions(map).minimised());

@@ -65,37 +65,50 @@ public final class Netlist {
 
     /** Simulates the netlist for register code {@code code}; returns the output values in port order. */
     public boolean[] simulate(int code) {
-        Map<String, Boolean> value = new java.util.HashMap<>();
+        Compiled c = compiled();
+        boolean[] value = new boolean[c.netCount];
         for (int i = 0; i < inputCount; i++) {
-            value.put(inputNet(i), ((code >> i) & 1) != 0);
+            value[i] = ((code >> i) & 1) != 0;
         }
-        for (Gate g : gates) {
+        for (int g = 0; g < c.inputs.length; g++) {
             boolean and = true;
             boolean or = false;
-            for (String in : g.inputs()) {
-                boolean v = value.get(in);
-                and &= v;
-                or |= v;
+            for (int in : c.inputs[g]) {
+                and &= value[in];
+                or |= value[in];
             }
-            boolean out;
-            switch (g.type()) {
-                case INV:
-                    out = !and;
-                    break;
-                case NAND2:
-                case NAND3:
-                    out = !and;
-                    break;
-                default:
-                    out = !or;
-                    break;
-            }
-            value.put(g.output(), out);
+            value[inputCount + g] = c.nor[g] ? !or : !and;
         }
-        boolean[] outs = new boolean[outputNets.size()];
+        boolean[] outs = new boolean[c.outputs.length];
         for (int i = 0; i < outs.length; i++) {
-            outs[i] = value.get(outputNets.get(i));
+            outs[i] = value[c.outputs[i]];
         }
         return outs;
+    }
+
+    /** Index form for simulation: nets 0..n-1 are the inputs, net n+g is the output of gate g. */
+    private record Compiled(int netCount, int[][] inputs, boolean[] nor, int[] outputs) {
+    }
+
+    private Compiled compiledForm;
+
+    private synchronized Compiled compiled() {
+        if (compiledForm == null) {
+            Map<String, Integer> index = new java.util.HashMap<>();
+            for (int i = 0; i < inputCount; i++) {
+                index.put(inputNet(i), i);
+            }
+            int[][] ins = new int[gates.size()][];
+            boolean[] nor = new boolean[gates.size()];
+            for (int g = 0; g < gates.size(); g++) {
+                Gate gate = gates.get(g);
+                ins[g] = gate.inputs().stream().mapToInt(index::get).toArray();
+                nor[g] = gate.type() == GateType.NOR2 || gate.type() == GateType.NOR3;
+                index.put(gate.output(), inputCount + g);
+            }
+            int[] outs = outputNets.stream().mapToInt(index::get).toArray();
+            compiledForm = new Compiled(inputCount + gates.size(), ins, nor, outs);
+        }
+        return compiledForm;
     }
 }
