@@ -74,7 +74,8 @@ class ExactMonotonicityTest {
 
     @Property(tries = 40)
     void exactLiesBetweenLargestTransitionAndUnionBound(@ForAll @IntRange(min = 2, max = 12) int bits,
-            @ForAll @IntRange(min = 0, max = 6) int unaryBits, @ForAll @DoubleRange(min = 0.002, max = 0.2) @Scale(4) double s) {
+            @ForAll @IntRange(min = 0, max = 6) int unaryBits,
+            @ForAll @DoubleRange(min = 0.002, max = 0.2) @Scale(4) double s) {
         // P(union of step events) is at most the sum (union bound) and at least the largest single event
         int m = Math.min(unaryBits, bits - 1);
         ElementSigmas sigmas = ElementSigmas.forField(field(bits, m), s);

@@ -78,7 +78,7 @@ public final class ExactYields {
                 + " (rigorous) + grid refinement and mass balance (estimated)", "nominal");
     }
 
-    /** DNL yield of a field under the endpoint-LSB definition (see {@link #dnlYieldEndpoint(ElementSigmas, double)}). */
+    /** DNL yield under the endpoint-LSB definition; see {@link #dnlYieldEndpoint(ElementSigmas, double)}. */
     public static ExactDnlYield dnlYieldEndpoint(FieldCoding coding, double unitSigma, double limitLsb) {
         return dnlYieldEndpoint(ElementSigmas.forField(coding, unitSigma), limitLsb);
     }
@@ -142,8 +142,8 @@ public final class ExactYields {
     /**
      * Estimate of the yield change from the neglected correlation between each step and the endpoint LSB:
      * conditioning on the sum shifts a step by cov(step, sum) / var(sum) times the sum deviation (its mean absolute
-     * value) and shrinks its variance by the squared correlation; each effect moves the step's acceptance probability by
-     * at most (shift or band change) times twice the step density at the band edge.
+     * value) and shrinks its variance by the squared correlation; each effect moves the step's acceptance
+     * probability by about (shift or band change) times twice the step density at the band edge.
      */
     private static double correlationEffect(double[] bin, double[] un, double variance, double x) {
         double total = 0.0;

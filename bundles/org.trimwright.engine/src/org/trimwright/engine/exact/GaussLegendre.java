@@ -27,9 +27,6 @@ final class GaussLegendre {
                     p0 = p1;
                     p1 = p2;
                 }
-                if (m == 1) {
-                    p0 = 1.0;
-                }
                 derivative = m * (x * p1 - p0) / (x * x - 1.0);
                 double dx = p1 / derivative;
                 x -= dx;

@@ -24,7 +24,7 @@ import org.trimwright.engine.stats.Normal;
  * <p>
  * Numerics: every g_t is held as a piecewise Chebyshev interpolant on [-L tau_t, L tau_t] intersected with its
  * exact support (tau_t^2 = sigma_0^2 + ... + sigma_t^2, L = {@value #TRUNCATION}), with panel breaks at the points
- * where the band edges make g_t non-smooth; integrals use Gauss-Legendre rules on sub-intervals no wider than 1.5
+ * where the band edges make g_t non-smooth; integrals use Gauss-Legendre rules on sub-intervals no wider than 2
  * sigma of the narrowest Gaussian factor. See docs/exact-methods.md for the error bound.
  */
 final class RunningSumRecursion {
