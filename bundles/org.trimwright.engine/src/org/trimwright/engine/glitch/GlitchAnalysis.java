@@ -12,8 +12,8 @@ import org.trimwright.engine.coding.CodeMap;
  * <p>Method: exact enumeration of all 2^t - 2 intermediate codes of a step that toggles t bits, the value taken
  * through the code map (the decoder's function; hazards inside the decoder logic are not modelled). Codes are
  * ordered by signed step count; the only ties, the two zeros of sign-magnitude, put the negative zero (sign bit
- * set, the larger code) first, so stepping -1, -0, +0, +1 toggles one register bit per step. The work is the sum over steps of
- * 2^t, about n * 2^n for a binary-ordered field, so 16-bit fields are enumerated exactly too.
+ * set, the larger code) first, so stepping -1, -0, +0, +1 toggles one register bit per step. The work is the
+ * sum over steps of 2^t, about n * 2^n for a binary-ordered field, so 16-bit fields are enumerated exactly too.
  */
 public final class GlitchAnalysis {
 

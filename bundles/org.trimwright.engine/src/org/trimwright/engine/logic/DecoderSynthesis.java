@@ -9,9 +9,9 @@ import org.trimwright.engine.coding.FieldCoding;
 
 /**
  * Synthesises a field's decoder: the {@link DecoderStructure} mapped to gates by the {@link TechMapper}, checked
- * against the code map by simulating every code (up to {@link #SELF_CHECK_LIMIT} bits), and counted into a {@link DecoderCost}. All widths 1..16 are
- * synthesised (the structures grow linearly with the number of outputs), so every count is exact for the
- * structure; none is estimated.
+ * against the code map by simulating every code (up to {@link #SELF_CHECK_LIMIT} bits), and counted into a
+ * {@link DecoderCost}. All widths 1..16 are synthesised (the structures grow linearly with the number of
+ * outputs), so every count is exact for the structure; none is estimated.
  */
 public final class DecoderSynthesis {
 
