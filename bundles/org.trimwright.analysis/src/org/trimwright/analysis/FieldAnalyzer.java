@@ -1,0 +1,88 @@
+package org.trimwright.analysis;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.function.IntToDoubleFunction;
+
+import org.trimwright.engine.coding.FieldCoding;
+import org.trimwright.engine.design.CodingAnalysis;
+import org.trimwright.engine.design.CodingReport;
+import org.trimwright.engine.exact.ElementSigmas;
+import org.trimwright.engine.exact.ExactDnlYield;
+import org.trimwright.engine.exact.ExactMonotonicity;
+import org.trimwright.engine.exact.ExactYields;
+import org.trimwright.engine.logic.DecoderCost;
+import org.trimwright.engine.logic.DecoderSynthesis;
+import org.trimwright.engine.logic.GateLibrary;
+import org.trimwright.engine.mismatch.MismatchAnalysis;
+import org.trimwright.engine.mismatch.MismatchReport;
+import org.trimwright.engine.mismatch.montecarlo.MonteCarloOptions;
+import org.trimwright.engine.mismatch.sizing.SizingRequest;
+import org.trimwright.model.AnalogTarget;
+import org.trimwright.model.Field;
+
+/** Computes the {@link FieldReport} of a model field (or of inline inputs) with the engine. */
+public final class FieldAnalyzer {
+
+    /** Monte Carlo trials kept whole for the transfer-curve envelope of charts. */
+    public static final int ENVELOPE_TRIALS = 200;
+
+    private FieldAnalyzer() {
+    }
+
+    /** Analyses a model field; throws {@link FieldMappingException} when the field cannot be mapped. */
+    public static FieldReport analyze(Field field, AnalysisSettings settings) {
+        FieldInputs in = FieldInputs.of(field);
+        MismatchInputs mm = MismatchInputs.of(field);
+        return analyze(field.getName(), in, mm, sizing(field), settings);
+    }
+
+    /**
+     * Analyses inline inputs.
+     *
+     * @param mm     mismatch inputs, or null for coding figures only
+     * @param sizing trim sizing question without the field's DNL figures (they are filled in), or null
+     */
+    public static FieldReport analyze(String name, FieldInputs in, MismatchInputs mm, SizingRequest sizing,
+            AnalysisSettings settings) {
+        CodingReport coding = CodingAnalysis.analyze(name, in.coding(), in.atZero(), in.step(), in.unit(),
+                settings.gateLibrary());
+        if (mm == null) {
+            return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
+        }
+        FieldCoding c = in.coding();
+        MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
+                (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
+        MismatchReport report = MismatchAnalysis.run(c, mm.model(), mm.limits(), options, splitCost(coding, c, settings.gateLibrary()),
+                sizing);
+        Optional<ExactMonotonicity> exact = Optional.empty();
+        Optional<ExactDnlYield> exactDnl = Optional.empty();
+        if (ExactYields.supports(c.scheme()) && exactApplies(mm)) {
+            ElementSigmas sigmas = ElementSigmas.forField(c, mm.model().unitSigma(), mm.model().switchSigma());
+            exact = Optional.of(ExactYields.monotonicity(sigmas));
+            exactDnl = Optional.of(ExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb()));
+        }
+        return new FieldReport(in, settings, coding, Optional.of(report), exact, exactDnl);
+    }
+
+    /** The exact methods take independent Gaussian elements without gradients. */
+    private static boolean exactApplies(MismatchInputs mm) {
+        return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0;
+    }
+
+    private static IntToDoubleFunction splitCost(CodingReport coding, FieldCoding c, GateLibrary lib) {
+        List<DecoderCost> splits = coding.splitCosts().isEmpty()
+                ? DecoderSynthesis.costPerSplit(c, lib) : coding.splitCosts();
+        return m -> splits.get(m).nand2Equivalent();
+    }
+
+    /** The trim sizing question of a field, or null when its target states no spread and accuracy. */
+    public static SizingRequest sizing(Field field) {
+        AnalogTarget t = field.getTarget();
+        if (t == null || !t.isSetSpreadMin() || !t.isSetSpreadMax() || !t.isSetAccuracy()) {
+            return null;
+        }
+        return new SizingRequest(t.getSpreadMin(), t.getSpreadMax(), t.getAccuracy(), t.getUnit(), 0, 0, false, 1,
+                field.getWidth());
+    }
+}

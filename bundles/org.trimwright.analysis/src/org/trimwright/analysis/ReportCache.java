@@ -1,0 +1,91 @@
+package org.trimwright.analysis;
+
+import java.util.Map;
+import java.util.WeakHashMap;
+
+import org.eclipse.emf.ecore.EAttribute;
+import org.eclipse.emf.ecore.EObject;
+import org.trimwright.model.Field;
+import org.trimwright.model.Register;
+
+/**
+ * One immutable {@link FieldReport} per field, recomputed only when something the analysis reads has changed:
+ * the field's attributes, its target, coding, element and limits, the register width, or the settings.
+ * Thread-safe; fields are held weakly, so a closed spec's reports go with it.
+ */
+public final class ReportCache {
+
+    private record Entry(String fingerprint, FieldReport report) {
+    }
+
+    private final Map<Field, Entry> entries = new WeakHashMap<>();
+    private volatile AnalysisSettings settings;
+
+    public ReportCache(AnalysisSettings settings) {
+        this.settings = settings;
+    }
+
+    public AnalysisSettings settings() {
+        return settings;
+    }
+
+    /** New settings; reports computed with other settings are recomputed on their next request. */
+    public void setSettings(AnalysisSettings newSettings) {
+        this.settings = newSettings;
+    }
+
+    /** The report of {@code field}, computed now if missing or stale. */
+    public FieldReport get(Field field) {
+        AnalysisSettings s = settings;
+        String key = fingerprint(field) + "|" + s;
+        synchronized (entries) {
+            Entry e = entries.get(field);
+            if (e != null && e.fingerprint.equals(key)) {
+                return e.report;
+            }
+        }
+        FieldReport report = FieldAnalyzer.analyze(field, s);
+        synchronized (entries) {
+            entries.put(field, new Entry(key, report));
+        }
+        return report;
+    }
+
+    /** The cached report if it is current, else null (never computes). */
+    public FieldReport peek(Field field) {
+        String key = fingerprint(field) + "|" + settings;
+        synchronized (entries) {
+            Entry e = entries.get(field);
+            return e != null && e.fingerprint.equals(key) ? e.report : null;
+        }
+    }
+
+    /** Number of fields held. */
+    public int size() {
+        synchronized (entries) {
+            return entries.size();
+        }
+    }
+
+    /** A string of every value the analysis reads from the field. */
+    static String fingerprint(Field field) {
+        StringBuilder sb = new StringBuilder(256);
+        append(sb, field);
+        if (field.eContainer() instanceof Register r) {
+            sb.append("|rw=").append(r.getWidth());
+        }
+        return sb.toString();
+    }
+
+    private static void append(StringBuilder sb, EObject o) {
+        sb.append(o.eClass().getName()).append('{');
+        for (EAttribute a : o.eClass().getEAllAttributes()) {
+            sb.append(a.getName()).append('=');
+            sb.append(o.eIsSet(a) ? String.valueOf(o.eGet(a)) : "-").append(';');
+        }
+        for (EObject child : o.eContents()) {
+            append(sb, child);
+        }
+        sb.append('}');
+    }
+}
