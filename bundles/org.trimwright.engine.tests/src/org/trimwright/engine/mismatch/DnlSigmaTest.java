@@ -22,7 +22,8 @@ class DnlSigmaTest {
     void binaryMidScaleDnlSigmaIsSqrtOfTwoToTheNMinusOneTimesUnitSigma() {
         double su = 0.013;
         for (int n = 1; n <= 16; n++) {
-            ElementArray array = ElementArray.of(FieldCoding.of(n, CodingScheme.BINARY, 0), ElementModel.ofUnitSigma(su));
+            ElementArray array = ElementArray.of(FieldCoding.of(n, CodingScheme.BINARY, 0),
+                    ElementModel.ofUnitSigma(su));
             Transition worst = TransitionAnalysis.of(array).worstSigma();
             assertEquals(Math.sqrt((1 << n) - 1) * su, worst.sigma(), 1e-15, "n = " + n);
             assertEquals(n - 1, worst.index());

@@ -38,7 +38,8 @@ class StructuralEvaluatorTest {
                 Arguments.of(new FieldCoding(6, CodingScheme.SEGMENTED, 2, SignedFormat.TWOS_COMPLEMENT, false, false)),
                 Arguments.of(new FieldCoding(7, CodingScheme.SEGMENTED, 3, SignedFormat.SIGN_MAGNITUDE, false, false)),
                 Arguments.of(new FieldCoding(6, CodingScheme.BINARY, 0, SignedFormat.SIGN_MAGNITUDE, false, false)),
-                Arguments.of(new FieldCoding(5, CodingScheme.THERMOMETER, 0, SignedFormat.SIGN_MAGNITUDE, false, false)),
+                Arguments.of(new FieldCoding(5, CodingScheme.THERMOMETER, 0, SignedFormat.SIGN_MAGNITUDE, false,
+                        false)),
                 Arguments.of(new FieldCoding(2, CodingScheme.GRAY, 0, SignedFormat.SIGN_MAGNITUDE, false, false)));
     }
 

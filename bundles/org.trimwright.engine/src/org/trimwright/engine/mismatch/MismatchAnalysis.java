@@ -60,7 +60,8 @@ public final class MismatchAnalysis {
         long dnlPass = Math.round(dnlYield * mc.trials());
         MismatchReport.DnlSummary dnl = new MismatchReport.DnlSummary(
                 "DNL = step - 1 in nominal LSB; sigma exact per transition, yield = P(max|DNL| < limit) by Monte Carlo",
-                worst.sigma(), worst.label(), limits.maxDnlLsb(), dnlYield, WilsonInterval.of(dnlPass, mc.trials(), 0.95),
+                worst.sigma(), worst.label(), limits.maxDnlLsb(), dnlYield,
+                WilsonInterval.of(dnlPass, mc.trials(), 0.95),
                 mc.mean(Metric.DNL), mc.mean(Metric.DNL_ENDPOINT), mc.quantile(Metric.DNL, limits.targetYield()));
 
         MismatchReport.InlSummary inl = new MismatchReport.InlSummary(

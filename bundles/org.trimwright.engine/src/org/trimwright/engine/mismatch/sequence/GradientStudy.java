@@ -24,7 +24,7 @@ import org.trimwright.engine.mismatch.montecarlo.TrialMetrics;
 public record GradientStudy(double gradientLinear, double gradientQuadratic, boolean reference,
         List<SequenceRow> rows, String best) {
 
-    /** Reference gradient (relative error at the array edge) used when the model has none: 1 % linear, 1 % quadratic. */
+    /** Reference gradient used when the model has none: 1 % linear and 1 % quadratic at the array edge. */
     public static final Gradient REFERENCE = new Gradient(0.01, 0.01);
 
     public GradientStudy {

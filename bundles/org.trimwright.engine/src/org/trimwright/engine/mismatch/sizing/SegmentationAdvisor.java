@@ -63,7 +63,8 @@ public final class SegmentationAdvisor {
             rows.add(new SegmentationRow(m, bits - m, array.unaryCount(), switches, nand2, cost,
                     ta.worstSigma().sigma(), ta.monotonicByConstruction(), ta.unionBound(),
                     (double) nonMono / trials, ci[1], mc.yield(Metric.DNL, limits.maxDnlLsb()),
-                    mc.yield(Metric.INL_ENDPOINT, limits.maxInlLsb()), mc.yield(Metric.INL_BEST_FIT, limits.maxInlLsb()),
+                    mc.yield(Metric.INL_ENDPOINT, limits.maxInlLsb()),
+                    mc.yield(Metric.INL_BEST_FIT, limits.maxInlLsb()),
                     mc.yield(Metric.INL_ABSOLUTE, limits.maxInlLsb()), pass, trials, meets));
             if (meets && cost < cheapestCost) {
                 cheapestCost = cost;
