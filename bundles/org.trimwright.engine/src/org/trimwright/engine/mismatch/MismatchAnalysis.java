@@ -27,6 +27,8 @@ import org.trimwright.engine.mismatch.sizing.TrimSizing;
  */
 public final class MismatchAnalysis {
 
+    /** Envelope work limit (trials times levels); wide fields get fewer envelope trials (stated in the report). */
+    public static final long ENVELOPE_WORK = 5_000_000L;
     /** Bins of the max|DNL| / max|INL| histograms. */
     public static final int HISTOGRAM_BINS = 50;
 
@@ -144,7 +146,8 @@ public final class MismatchAnalysis {
         double[] nominal = codes.transfer(u, b);
         double[] systematic = codes.inl(nominal)[0];
         int levels = codes.levels();
-        int env = options.envelopeTrials();
+        int env = (int) Math.min(options.envelopeTrials(), Math.max(10, ENVELOPE_WORK / levels));
+        env = (int) Math.min(env, options.trials());
         double[] dnlMin = new double[levels];
         double[] dnlMax = new double[levels];
         double[] inlMin = new double[levels];
