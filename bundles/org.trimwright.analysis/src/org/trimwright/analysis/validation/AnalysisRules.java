@@ -13,7 +13,8 @@ import org.trimwright.model.rules.FieldRuleProvider;
 import org.trimwright.model.spec.ElementPaths;
 
 /**
- * The analysis constraints of the generated validator: each reads the field's report from a {@link ReportCache}.
+ * The analysis constraints of the generated validator: each reads the field's reports from a {@link ReportCache}
+ * (the quick report first, the full one only where a rule needs it).
  * A diagnostic's data holds the field first and its {@link Finding} second.
  */
 final class AnalysisRules implements FieldRuleProvider {
@@ -35,7 +36,7 @@ final class AnalysisRules implements FieldRuleProvider {
     public boolean check(String constraint, Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
         if (constraint.equals("analysable")) {
             try {
-                cache.get(field);
+                cache.quick(field);
                 return true;
             } catch (IllegalArgumentException e) {
                 String path = ElementPaths.of(field);
@@ -50,11 +51,11 @@ final class AnalysisRules implements FieldRuleProvider {
         }
         FieldReport report;
         try {
-            report = cache.get(field);
+            report = cache.quick(field);
         } catch (IllegalArgumentException e) {
             return true;
         }
-        List<Finding> found = rule.check(field, report);
+        List<Finding> found = rule.check(field, report, () -> cache.get(field));
         for (Finding f : found) {
             add(diagnostics, field, f);
         }

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.Supplier;
 
 import org.trimwright.analysis.FieldReport;
 import org.trimwright.engine.coding.StepRow;
@@ -51,7 +52,7 @@ final class CodingFitRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             if (field.getCoding() == null || (field.getCoding().getScheme() != CodingScheme.ONE_HOT
                     && field.getCoding().getScheme() != CodingScheme.ONE_COLD)) {
                 return List.of();
@@ -97,7 +98,7 @@ final class CodingFitRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             Limits l = field.getLimits();
             if (field.getStepping() != Stepping.ONE_CODE_AT_ATIME || field.getWidth() < 2 || l == null
                     || !l.isSetMaxGlitchLsb()) {
@@ -142,15 +143,19 @@ final class CodingFitRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             if (field.getRole() != FieldRole.TRIM || field.getProductionSearch() != ProductionSearch.BINARY_SEARCH
                     || r.mismatch().isEmpty()) {
                 return List.of();
             }
-            MismatchReport m = r.mismatch().get();
-            MonotonicRisk risk = MonotonicRisk.of(r, m);
             double allowed = field.getLimits() == null ? DEFAULT_SEARCH_RISK
                     : field.getLimits().getMaxNonMonotonicRisk();
+            if (clearedByUnionBound(r, allowed)) {
+                return List.of();
+            }
+            r = full.get();
+            MismatchReport m = r.mismatch().get();
+            MonotonicRisk risk = MonotonicRisk.of(r, m);
             if (risk.guaranteed() || risk.probability() <= allowed) {
                 return List.of();
             }
@@ -169,6 +174,15 @@ final class CodingFitRules {
             return List.of(new Finding("search.binary-not-monotonic", Severity.WARNING, r.inputs().path(), message,
                     advice, fig));
         }
+    }
+
+    /**
+     * True when the report shows the field monotonic by construction or its union bound (an upper bound of the
+     * exact P(non-monotonic)) within {@code allowed}: then no exact figure can exceed it.
+     */
+    static boolean clearedByUnionBound(FieldReport r, double allowed) {
+        MismatchReport.Monotonicity m = r.mismatch().get().monotonic();
+        return m.guaranteed() || m.unionBound() <= allowed;
     }
 
     /** The codes of a step table as a short list. */

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Supplier;
 
 import org.trimwright.analysis.FieldReport;
 import org.trimwright.engine.exact.ExactDnlYield;
@@ -31,11 +32,15 @@ final class LinearityRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             Limits l = field.getLimits();
             if (l == null || !l.isMustBeMonotonic() || r.mismatch().isEmpty()) {
                 return List.of();
             }
+            if (CodingFitRules.clearedByUnionBound(r, l.getMaxNonMonotonicRisk())) {
+                return List.of();
+            }
+            r = full.get();
             MismatchReport m = r.mismatch().get();
             MonotonicRisk risk = MonotonicRisk.of(r, m);
             if (risk.guaranteed() || risk.probability() <= l.getMaxNonMonotonicRisk()) {
@@ -69,11 +74,17 @@ final class LinearityRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             Limits l = field.getLimits();
             if (l == null || r.mismatch().isEmpty()) {
                 return List.of();
             }
+            MismatchReport q = r.mismatch().get();
+            if ((!l.isSetMaxDnlLsb() || q.dnl().yield() >= q.limits().targetYield()) && (!l.isSetMaxInlLsb()
+                    || q.inl().get(q.limits().inlDefinition()).yield() >= q.limits().targetYield())) {
+                return List.of();
+            }
+            r = full.get();
             MismatchReport m = r.mismatch().get();
             double target = m.limits().targetYield();
             long n = m.run().trials();

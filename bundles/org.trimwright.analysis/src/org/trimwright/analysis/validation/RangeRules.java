@@ -4,6 +4,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Supplier;
 
 import org.trimwright.analysis.FieldReport;
 import org.trimwright.engine.coding.StepTable;
@@ -36,7 +37,7 @@ final class RangeRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             AnalogTarget t = field.getTarget();
             if (t == null || !t.isSetSpreadMin() || !t.isSetSpreadMax()) {
                 return List.of();
@@ -99,7 +100,7 @@ final class RangeRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             AnalogTarget t = field.getTarget();
             if (t == null || !t.isSetAccuracy()) {
                 return List.of();
@@ -134,7 +135,7 @@ final class RangeRules {
         }
 
         @Override
-        public List<Finding> check(Field field, FieldReport r) {
+        public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
             AnalogTarget t = field.getTarget();
             if (t == null || !t.isSetAccuracy() || r.mismatch().isEmpty()) {
                 return List.of();

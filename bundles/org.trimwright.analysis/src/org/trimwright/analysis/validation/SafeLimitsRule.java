@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Supplier;
 
 import org.trimwright.analysis.FieldReport;
 import org.trimwright.engine.coding.StepRow;
@@ -28,7 +29,7 @@ final class SafeLimitsRule implements FieldRule {
     }
 
     @Override
-    public List<Finding> check(Field field, FieldReport r) {
+    public List<Finding> check(Field field, FieldReport r, Supplier<FieldReport> full) {
         AnalogTarget t = field.getTarget();
         if (t == null || (!t.isSetSafeMin() && !t.isSetSafeMax())) {
             return List.of();

@@ -38,8 +38,8 @@ public final class SpecValidation {
     }
 
     /**
-     * All findings of {@code spec} in spec order (structural and analysis). Reports missing from the cache are
-     * computed first, field by field in parallel.
+     * All findings of {@code spec} in spec order (structural and analysis). Quick reports missing from the cache
+     * are computed first, field by field in parallel; full reports only for the fields a rule cannot clear.
      */
     public static List<Finding> validate(ChipSpec spec, ReportCache cache) {
         TrimwrightPackage.eINSTANCE.eClass();
@@ -112,7 +112,7 @@ public final class SpecValidation {
         }
         fields.parallelStream().forEach(f -> {
             try {
-                cache.get(f);
+                cache.quick(f);
             } catch (IllegalArgumentException e) {
                 // reported by the 'analysable' constraint
             }
