@@ -21,6 +21,7 @@ public final class Main {
         Map<String, Command> m = new LinkedHashMap<>();
         m.put("summary", new SummaryCommand());
         m.put("analyze", new AnalyzeCommand());
+        m.put("export", new ExportCommand());
         return m;
     }
 
