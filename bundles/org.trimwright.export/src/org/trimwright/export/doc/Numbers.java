@@ -16,7 +16,10 @@ public final class Numbers {
         if (Double.isNaN(v)) {
             return "n/a";
         }
-        if (v != 0 && Math.abs(v) < 1e-3) {
+        if (v == 0) {
+            return "0";
+        }
+        if (Math.abs(v) < 1e-3) {
             return String.format(Locale.ROOT, "%.3e", v);
         }
         return String.format(Locale.ROOT, "%.4g", v);

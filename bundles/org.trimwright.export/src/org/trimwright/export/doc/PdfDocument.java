@@ -54,6 +54,7 @@ public final class PdfDocument {
         doc = new Document(PageSize.A4, 40, 40, 48, 48);
         writer = PdfWriter.getInstance(doc, out);
         writer.setFullCompression();
+        writer.setStrictImageSequence(true);
         body = new Font(fonts.base(), 9.5f);
         small = new Font(fonts.base(), 8f);
         caption = new Font(fonts.base(), 8f, Font.NORMAL, MUTED);
@@ -113,10 +114,13 @@ public final class PdfDocument {
         doc.add(kv);
     }
 
+    private boolean afterChapterHead;
+
     private void section(Section s) throws DocumentException {
-        if (s.level() <= 2) {
+        if (s.level() == 1 || (s.level() == 2 && !afterChapterHead)) {
             doc.newPage();
         }
+        afterChapterHead = s.level() == 1 && s.parts().size() <= 1;
         Font f = s.level() == 1 ? h1 : s.level() == 2 ? h2 : h3;
         Paragraph head = new Paragraph(new Chunk(s.title(), f).setLocalDestination(s.id()));
         head.setSpacingBefore(s.level() == 3 ? 10 : 0);
@@ -197,11 +201,14 @@ public final class PdfDocument {
 
     private void chart(JFreeChart chart, String title) throws DocumentException {
         PdfContentByte cb = writer.getDirectContent();
-        PdfTemplate tp = cb.createTemplate(CHART_W, CHART_H);
-        Graphics2D g = tp.createGraphics(CHART_W, CHART_H, fonts);
-        chart.draw(g, new Rectangle2D.Double(0, 0, CHART_W, CHART_H));
+        float w = ChartSvg.WIDTH;
+        float h = ChartSvg.HEIGHT;
+        PdfTemplate tp = cb.createTemplate(w, h);
+        Graphics2D g = tp.createGraphics(w, h, fonts);
+        chart.draw(g, new Rectangle2D.Double(0, 0, w, h));
         g.dispose();
         Image img = Image.getInstance(tp);
+        img.scaleToFit(CHART_W, CHART_H);
         img.setAlignment(Image.MIDDLE);
         doc.add(img);
         doc.add(new Paragraph(title, caption));
