@@ -71,6 +71,13 @@ public class SpecEditorPart {
         return document;
     }
 
+    /** Records the document's (new) file in the part, after Save As. */
+    public void rememberFile() {
+        if (document != null) {
+            part.getPersistedState().put(Topics.FILE_KEY, document.file().toAbsolutePath().normalize().toString());
+        }
+    }
+
     public SpecEditorView view() {
         return view;
     }
