@@ -57,7 +57,9 @@ public final class DetailForm {
         body = new Composite(parent, SWT.NONE);
         body.setLayout(new GridLayout(1, false));
         message = new Label(body, SWT.WRAP);
-        message.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        GridData md = new GridData(SWT.FILL, SWT.TOP, true, false);
+        md.widthHint = 200;
+        message.setLayoutData(md);
         message.setForeground(body.getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
         bitMap = new BitMapCanvas(body, onBitMapClick);
         GridData bd = new GridData(SWT.FILL, SWT.TOP, true, false);
@@ -132,7 +134,8 @@ public final class DetailForm {
         body.layout(true, true);
         Composite scroller = body.getParent();
         if (scroller instanceof org.eclipse.swt.custom.ScrolledComposite sc) {
-            sc.setMinSize(body.computeSize(SWT.DEFAULT, SWT.DEFAULT));
+            int w = Math.max(sc.getClientArea().width, 360);
+            sc.setMinSize(w, body.computeSize(w, SWT.DEFAULT).y);
         }
     }
 
@@ -383,19 +386,24 @@ public final class DetailForm {
         }
     }
 
-    /** "maxDnlLsb" -> "Max DNL LSB"; "valueAtZero" -> "Value at zero". */
+    /** "maxDnlLsb" -> "Max DNL (LSB)"; "valueAtZero" -> "Value at zero"; "unitSigmaPercent" -> "Unit sigma (%)". */
     static String humanise(String name) {
+        String[] words = name.split("(?=[A-Z])");
         StringBuilder sb = new StringBuilder();
-        for (int i = 0; i < name.length(); i++) {
-            char ch = name.charAt(i);
-            if (Character.isUpperCase(ch) && i > 0) {
-                sb.append(' ');
+        for (int i = 0; i < words.length; i++) {
+            String w = words[i].toLowerCase();
+            String shown = switch (w) {
+                case "dnl", "inl", "lsb" -> w.equals("lsb") ? "(LSB)" : w.toUpperCase();
+                case "percent" -> i + 1 < words.length && words[i + 1].equalsIgnoreCase("um") ? "(%\u00B7\u00B5m)"
+                        : "(%)";
+                case "um" -> i > 0 && words[i - 1].equalsIgnoreCase("percent") ? null : "\u00B5m";
+                case "um2" -> "(\u00B5m\u00B2)";
+                default -> i == 0 ? Character.toUpperCase(w.charAt(0)) + w.substring(1) : w;
+            };
+            if (shown != null) {
+                sb.append(sb.length() == 0 ? "" : " ").append(shown);
             }
-            sb.append(i == 0 ? Character.toUpperCase(ch) : ch);
         }
-        String s = sb.toString().replace("Dnl", "DNL").replace("Inl", "INL").replace("Lsb", "(LSB)")
-                .replace("Um2", "(\u00B5m\u00B2)").replace(" Percent Um", " (%\u00B7\u00B5m)")
-                .replace(" Percent", " (%)");
-        return s;
+        return sb.toString();
     }
 }

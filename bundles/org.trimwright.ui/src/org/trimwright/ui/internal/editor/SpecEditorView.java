@@ -49,16 +49,18 @@ public final class SpecEditorView {
         sc.setExpandVertical(true);
         form = new DetailForm(sc, this::select);
         sc.setContent(form.control());
-        sc.addListener(SWT.Resize, e -> sc.setMinSize(form.control().computeSize(sc.getClientArea().width,
-                SWT.DEFAULT)));
-        sash.setWeights(30, 70);
+        sc.addListener(SWT.Resize, e -> {
+            int w = Math.max(sc.getClientArea().width, 360);
+            sc.setMinSize(w, form.control().computeSize(w, SWT.DEFAULT).y);
+        });
+        sash.setWeights(36, 64);
         tree.addSelectionChangedListener(e -> {
             Object first = ((IStructuredSelection) e.getSelection()).getFirstElement();
             selected = first instanceof EObject eo ? eo : null;
             form.show(this.document, selected);
             selectionListeners.forEach(l -> l.accept(selected));
         });
-        tree.setInput(document.spec());
+        tree.setInput(new SpecTreeProvider.Root(document.spec()));
         tree.expandToLevel(3);
         contextMenu();
         document.addListener(docListener);
@@ -107,7 +109,7 @@ public final class SpecEditorView {
         }
         if (change == SpecDocument.Change.RELOADED) {
             String path = selected == null ? null : org.trimwright.model.spec.ElementPaths.of(selected);
-            tree.setInput(document.spec());
+            tree.setInput(new SpecTreeProvider.Root(document.spec()));
             tree.expandToLevel(3);
             EObject again = path == null ? null : find(document.spec(), path);
             if (again != null) {

@@ -15,11 +15,15 @@ final class SpecTreeProvider {
     private SpecTreeProvider() {
     }
 
-    /** Content: the input's single root (the chip), then blocks, registers, fields. */
+    /** The viewer's input: a holder of the chip (the input must not be an element of the tree itself). */
+    record Root(ChipSpec spec) {
+    }
+
+    /** Content: the chip, then blocks, registers, fields. */
     static final class Content implements ITreeContentProvider {
         @Override
         public Object[] getElements(Object input) {
-            return input instanceof ChipSpec c ? new Object[] {c} : new Object[0];
+            return input instanceof Root r && r.spec() != null ? new Object[] {r.spec()} : new Object[0];
         }
 
         @Override

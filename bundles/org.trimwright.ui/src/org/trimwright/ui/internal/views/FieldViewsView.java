@@ -273,7 +273,7 @@ public final class FieldViewsView {
     }
 
     private String summary(AnalysisKey key, FieldReport r, int s) {
-        String base = key.inputs().path() + "  \u2014  " + r.coding().coding().scheme() + ", "
+        String base = key.inputs().path() + "  \u2014  " + ReportTables.key(r.coding().coding().scheme()) + ", "
                 + r.coding().coding().bits() + " bits";
         if (r.mismatch().isEmpty()) {
             return base + (key.mismatch() == null ? "; no unit element, coding figures only" : "; Monte Carlo ...");

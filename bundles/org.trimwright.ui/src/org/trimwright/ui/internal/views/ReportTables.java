@@ -138,8 +138,8 @@ final class ReportTables {
     static List<String[]> figures(FieldReport r, InlDefinition preferred, int stage) {
         List<String[]> rows = new ArrayList<>();
         CodingReport c = r.coding();
-        rows.add(new String[] {"Codes", Integer.toString(c.stepTable().size()), c.coding().scheme() + ", "
-            + c.coding().signedFormat()});
+        rows.add(new String[] {"Codes", Integer.toString(c.stepTable().size()), key(c.coding().scheme()) + ", "
+            + key(c.coding().signedFormat())});
         rows.add(new String[] {"Decoder NAND2 equivalents", fmt(c.cost().nand2Equivalent()), c.cost().method()});
         rows.add(new String[] {"Worst glitch excursion", c.glitch().worstExcursionLsb() + " LSB",
             "largest intermediate value any bit skew can reach, per adjacent step"});
@@ -176,6 +176,10 @@ final class ReportTables {
             + String.format(Locale.ROOT, "%.2f s", run.seconds()), run.method()
             + (stage == 2 ? " (preview; full run follows)" : "")});
         return rows;
+    }
+
+    static String key(Enum<?> e) {
+        return e.name().toLowerCase(Locale.ROOT).replace('_', '-');
     }
 
     static String fmt(double v) {
