@@ -18,6 +18,11 @@ public final class Topics {
 
     /** Application-context key of the last active spec editor part object. */
     public static final String ACTIVE_EDITOR = "org.trimwright.ui.activeEditor";
+    /** Application-context key of the last {@link org.trimwright.ui.internal.doc.Selection} of any spec editor. */
+    public static final String LAST_SELECTION = "org.trimwright.ui.lastSelection";
+    /** Contribution of spec editor parts. */
+    public static final String EDITOR_CLASS =
+            "bundleclass://org.trimwright.ui/org.trimwright.ui.internal.editor.SpecEditorPart";
     /** Part descriptor of spec editors. */
     public static final String EDITOR_DESCRIPTOR = "org.trimwright.ui.partdescriptor.speceditor";
     /** Part stack that holds spec editors. */

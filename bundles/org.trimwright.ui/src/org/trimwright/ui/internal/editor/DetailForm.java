@@ -199,7 +199,12 @@ public final class DetailForm {
         } else {
             c = text(g, owner, a);
         }
-        c.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        if (!(c.getLayoutData() instanceof GridData)) {
+            GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+            gd.minimumWidth = 120;
+            gd.widthHint = 120;
+            c.setLayoutData(gd);
+        }
         Label unit = new Label(g, SWT.NONE);
         unit.setText(hint(owner, a));
         controls.put(a, c);

@@ -19,6 +19,7 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
+import org.trimwright.model.Field;
 import org.trimwright.model.spec.SpecLoadException;
 import org.trimwright.ui.internal.Topics;
 import org.trimwright.ui.internal.doc.Selection;
@@ -57,13 +58,37 @@ public class SpecEditorPart {
         part.setLabel(file.getFileName().toString());
         part.setTooltip(file.toString());
         view = new SpecEditorView(parent, document);
-        view.addSelectionListener(e -> broker.post(Topics.SELECTION, new Selection(document, e)));
+        view.addSelectionListener(e -> {
+            Selection sel = new Selection(document, e);
+            application.getContext().set(Topics.LAST_SELECTION, sel);
+            broker.post(Topics.SELECTION, sel);
+        });
         document.addListener((d, c) -> {
             part.setDirty(d.isDirty());
             part.setLabel(d.file().getFileName().toString());
             part.setTooltip(d.file().toString());
         });
         window.getContext().set(ISaveHandler.class, new SavePrompt(parent.getShell()));
+        Field first = firstAnalysedField(document.spec());
+        if (first != null) {
+            view.select(first);
+        }
+    }
+
+    /** The first field with a unit element (what the field views can show in full), else the first field. */
+    static Field firstAnalysedField(org.trimwright.model.ChipSpec spec) {
+        Field any = null;
+        for (org.trimwright.model.Block b : spec.getBlocks()) {
+            for (org.trimwright.model.Register r : b.getRegisters()) {
+                for (Field f : r.getFields()) {
+                    if (f.getElement() != null) {
+                        return f;
+                    }
+                    any = any == null ? f : any;
+                }
+            }
+        }
+        return any;
     }
 
     /** The open document (null when the file could not be read). */

@@ -53,7 +53,7 @@ public final class SpecEditorView {
             int w = Math.max(sc.getClientArea().width, 360);
             sc.setMinSize(w, form.control().computeSize(w, SWT.DEFAULT).y);
         });
-        sash.setWeights(36, 64);
+        sash.setWeights(34, 66);
         tree.addSelectionChangedListener(e -> {
             Object first = ((IStructuredSelection) e.getSelection()).getFirstElement();
             selected = first instanceof EObject eo ? eo : null;

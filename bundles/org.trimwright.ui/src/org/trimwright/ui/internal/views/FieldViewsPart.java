@@ -3,6 +3,7 @@ package org.trimwright.ui.internal.views;
 import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.ui.di.Focus;
 import org.eclipse.e4.ui.di.UIEventTopic;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.trimwright.model.Field;
@@ -19,11 +20,14 @@ public class FieldViewsPart {
     private FieldViewsView view;
 
     @PostConstruct
-    void create(Composite parent) {
+    void create(Composite parent, MApplication app) {
         parent.setLayout(new FillLayout());
         view = new FieldViewsView(parent);
         UiPreferences p = UiPreferences.load();
         view.setSettings(p.settings(), p.inlDefinition());
+        if (app.getContext().get(Topics.LAST_SELECTION) instanceof Selection s) {
+            selection(s);
+        }
     }
 
     public FieldViewsView view() {

@@ -83,7 +83,7 @@ public final class FieldViewsView {
         cancel.setText("Cancel");
         cancel.setEnabled(false);
         cancel.addListener(SWT.Selection, e -> cancel());
-        tabs = new CTabFolder(root, SWT.BORDER | SWT.BOTTOM);
+        tabs = new CTabFolder(root, SWT.BORDER | SWT.TOP);
         tabs.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 3, 1));
         chartTab("Transfer");
         chartTab("DNL / INL");

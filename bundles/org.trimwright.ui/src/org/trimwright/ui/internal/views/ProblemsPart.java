@@ -4,6 +4,7 @@ import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
 import org.eclipse.e4.ui.di.UIEventTopic;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Composite;
@@ -21,7 +22,7 @@ public class ProblemsPart {
     private ProblemsView view;
 
     @PostConstruct
-    void create(Composite parent) {
+    void create(Composite parent, MApplication app) {
         parent.setLayout(new FillLayout());
         view = new ProblemsView(parent, f -> {
             EObject target = f.element();
@@ -34,6 +35,9 @@ public class ProblemsPart {
                 broker.send(Topics.REVEAL, new Selection(view.document(), target));
             }
         });
+        if (app.getContext().get(Topics.LAST_SELECTION) instanceof Selection s) {
+            view.show(s.document());
+        }
     }
 
     @Inject
