@@ -17,7 +17,11 @@ import org.trimwright.engine.logic.GateLibrary;
 import org.trimwright.engine.mismatch.MismatchAnalysis;
 import org.trimwright.engine.mismatch.MismatchReport;
 import org.trimwright.engine.mismatch.montecarlo.MonteCarloOptions;
+import org.trimwright.engine.mismatch.sizing.SegmentationAdvice;
+import org.trimwright.engine.mismatch.sizing.SegmentationAdvisor;
 import org.trimwright.engine.mismatch.sizing.SizingRequest;
+import org.trimwright.engine.mismatch.sizing.SizingResult;
+import org.trimwright.engine.mismatch.sizing.TrimSizing;
 import org.trimwright.model.AnalogTarget;
 import org.trimwright.model.Field;
 
@@ -26,6 +30,11 @@ public final class FieldAnalyzer {
 
     /** Monte Carlo trials kept whole for the transfer-curve envelope of charts. */
     public static final int ENVELOPE_TRIALS = 200;
+    /**
+     * Monte Carlo trials per split of the segmentation advice (n + 1 splits are sampled, so fewer than the field's
+     * own run; the advice's union bounds and DNL sigmas are exact regardless).
+     */
+    public static final long ADVICE_TRIALS = 20_000;
 
     private FieldAnalyzer() {
     }
@@ -35,6 +44,28 @@ public final class FieldAnalyzer {
         FieldInputs in = FieldInputs.of(field);
         MismatchInputs mm = MismatchInputs.of(field);
         return analyze(field.getName(), in, mm, sizing(field), settings);
+    }
+
+    /**
+     * A cheaper report of a model field for screening a whole spec: the coding figures, the Monte Carlo statistics
+     * and the trim sizing, but no segmentation advice (its Monte Carlo runs every split) and no exact rare-event
+     * figures ({@code exactMonotonic} and {@code exactDnl} empty). The union bound in the mismatch report is an upper
+     * bound of the exact P(non-monotonic), so a field it clears needs no more; for the others ask
+     * {@link #analyze(Field, AnalysisSettings)}.
+     */
+    public static FieldReport analyzeQuick(Field field, AnalysisSettings settings) {
+        FieldInputs in = FieldInputs.of(field);
+        MismatchInputs mm = MismatchInputs.of(field);
+        CodingReport coding = CodingAnalysis.analyze(field.getName(), in.coding(), in.atZero(), in.step(), in.unit(),
+                settings.gateLibrary());
+        if (mm == null) {
+            return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
+        }
+        MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
+                (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
+        MismatchReport report = MismatchAnalysis.run(in.coding(), mm.model(), mm.limits(), options, null,
+                sizing(field));
+        return new FieldReport(in, settings, coding, Optional.of(report), Optional.empty(), Optional.empty());
     }
 
     /**
@@ -53,11 +84,15 @@ public final class FieldAnalyzer {
         FieldCoding c = in.coding();
         MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
                 (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
-        MismatchReport report = MismatchAnalysis.run(c, mm.model(), mm.limits(), options, splitCost(coding, c, settings.gateLibrary()),
-                sizing);
+        MismatchReport report = MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
+        SegmentationAdvice advice = SegmentationAdvisor.advise(c.bits(), c.signedFormat(), mm.model(), mm.limits(),
+                options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
+                splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ);
+        SizingResult sized = sizing == null ? null : TrimSizing.size(sizing.withField(report));
+        report = report.with(advice, sized);
         Optional<ExactMonotonicity> exact = Optional.empty();
         Optional<ExactDnlYield> exactDnl = Optional.empty();
-        if (ExactYields.supports(c.scheme()) && exactApplies(mm)) {
+        if (ExactYields.supports(c.scheme()) && exactApplies(c, mm)) {
             ElementSigmas sigmas = ElementSigmas.forField(c, mm.model().unitSigma(), mm.model().switchSigma());
             exact = Optional.of(ExactYields.monotonicity(sigmas));
             exactDnl = Optional.of(ExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb()));
@@ -65,9 +100,13 @@ public final class FieldAnalyzer {
         return new FieldReport(in, settings, coding, Optional.of(report), exact, exactDnl);
     }
 
-    /** The exact methods take independent Gaussian elements without gradients. */
-    private static boolean exactApplies(MismatchInputs mm) {
-        return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0;
+    /**
+     * The exact methods take independent Gaussian elements without gradients, in the array's own code order
+     * (sign-magnitude fields steer one magnitude array both ways and are not covered).
+     */
+    static boolean exactApplies(FieldCoding c, MismatchInputs mm) {
+        return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0
+                && c.signedFormat() != org.trimwright.engine.coding.SignedFormat.SIGN_MAGNITUDE;
     }
 
     private static IntToDoubleFunction splitCost(CodingReport coding, FieldCoding c, GateLibrary lib) {
