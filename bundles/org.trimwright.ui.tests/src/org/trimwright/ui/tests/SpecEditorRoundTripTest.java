@@ -224,31 +224,37 @@ class SpecEditorRoundTripTest {
         Field coarse = ElementPaths.findField(doc.spec(), "OSC/OSC_TRIM/FREQ_COARSE");
         assertEquals(java.util.List.of(coarse), editor.form().bitMap().owners(9));
 
-        int before = problems.findings().size();
+        Ui.pumpUntil("analysis rules of the demo", problems::isAnalysed, WAIT);
+        int before = problems.rows().size();
         Text offset = (Text) editor.form().controlFor(P.getField_BitOffset());
         type(offset, "8");
         assertEquals(8, fine.getBitOffset());
         assertEquals(2, editor.form().bitMap().owners(9).size(), "bits 8 and 9 now claimed twice");
-        assertTrue(problems.findings().size() > before, "the overlap is reported");
+        assertTrue(problems.rows().stream().anyMatch(r -> r.finding().message().contains("overlap")),
+                "the overlap is reported at once by the structural rules: " + problems.rows());
+        Ui.pumpUntil("analysis rules after the edit", problems::isAnalysed, WAIT);
+        assertTrue(problems.rows().stream().anyMatch(r -> r.finding().message().contains("overlap")),
+                problems.rows().toString());
         Ui.screenshot(shell, "04-findings-overlap");
 
         editor.select(doc.spec());
         Ui.settle(50);
         int row = -1;
-        for (int i = 0; i < problems.findings().size(); i++) {
-            EObject e = problems.findings().get(i).element();
+        for (int i = 0; i < problems.rows().size(); i++) {
+            EObject e = problems.rows().get(i).element();
             if (e == fine || e == coarse) {
                 row = i;
             }
         }
-        assertTrue(row >= 0, "a finding names one of the overlapping fields: " + problems.findings());
+        assertTrue(row >= 0, "a finding names one of the overlapping fields: " + problems.rows());
         problems.table().setSelection(row);
         problems.table().notifyListeners(SWT.DefaultSelection, new org.eclipse.swt.widgets.Event());
         Ui.settle(50);
-        assertSame(problems.findings().get(row).element(), editor.selection(), "double-click selects the field");
+        assertSame(problems.rows().get(row).element(), editor.selection(), "double-click selects the field");
         doc.undo();
         assertEquals(10, fine.getBitOffset());
-        assertEquals(before, problems.findings().size());
+        Ui.pumpUntil("analysis rules after the undo", problems::isAnalysed, WAIT);
+        assertEquals(before, problems.rows().size());
     }
 
     @Test

@@ -145,6 +145,39 @@ public final class SpecDocument {
         fire(Change.RELOADED);
     }
 
+    /** The element at BLOCK, BLOCK/REGISTER or BLOCK/REGISTER/FIELD (or the chip's name), or null. */
+    public org.eclipse.emf.ecore.EObject find(String path) {
+        if (path == null || path.isEmpty()) {
+            return null;
+        }
+        String[] p = path.split("/");
+        if (p.length == 1 && p[0].equals(spec.getName())) {
+            return spec;
+        }
+        for (org.trimwright.model.Block b : spec.getBlocks()) {
+            if (!p[0].equals(b.getName())) {
+                continue;
+            }
+            if (p.length == 1) {
+                return b;
+            }
+            for (org.trimwright.model.Register r : b.getRegisters()) {
+                if (!p[1].equals(r.getName())) {
+                    continue;
+                }
+                if (p.length == 2) {
+                    return r;
+                }
+                for (org.trimwright.model.Field f : r.getFields()) {
+                    if (p[2].equals(f.getName())) {
+                        return f;
+                    }
+                }
+            }
+        }
+        return null;
+    }
+
     public void addListener(Listener l) {
         listeners.add(l);
     }

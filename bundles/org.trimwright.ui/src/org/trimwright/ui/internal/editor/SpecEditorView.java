@@ -111,7 +111,7 @@ public final class SpecEditorView {
             String path = selected == null ? null : org.trimwright.model.spec.ElementPaths.of(selected);
             tree.setInput(new SpecTreeProvider.Root(document.spec()));
             tree.expandToLevel(3);
-            EObject again = path == null ? null : find(document.spec(), path);
+            EObject again = path == null ? null : document.find(path);
             if (again != null) {
                 select(again);
             } else {
@@ -129,36 +129,6 @@ public final class SpecEditorView {
         if (selected != null) {
             selectionListeners.forEach(l -> l.accept(selected));
         }
-    }
-
-    /** Finds BLOCK, BLOCK/REGISTER or BLOCK/REGISTER/FIELD in a spec. */
-    static EObject find(ChipSpec spec, String path) {
-        String[] p = path.split("/");
-        if (p.length == 1 && p[0].equals(spec.getName())) {
-            return spec;
-        }
-        for (Block b : spec.getBlocks()) {
-            if (!p[0].equals(b.getName())) {
-                continue;
-            }
-            if (p.length == 1) {
-                return b;
-            }
-            for (Register r : b.getRegisters()) {
-                if (!p[1].equals(r.getName())) {
-                    continue;
-                }
-                if (p.length == 2) {
-                    return r;
-                }
-                for (Field f : r.getFields()) {
-                    if (p[2].equals(f.getName())) {
-                        return f;
-                    }
-                }
-            }
-        }
-        return null;
     }
 
     private void contextMenu() {

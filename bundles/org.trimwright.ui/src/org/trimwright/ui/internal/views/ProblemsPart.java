@@ -24,8 +24,8 @@ public class ProblemsPart {
     @PostConstruct
     void create(Composite parent, MApplication app) {
         parent.setLayout(new FillLayout());
-        view = new ProblemsView(parent, f -> {
-            EObject target = f.element();
+        view = new ProblemsView(parent, row -> {
+            EObject target = row.element();
             while (target != null && !(target instanceof org.trimwright.model.Field)
                     && !(target instanceof org.trimwright.model.Register)
                     && !(target instanceof org.trimwright.model.Block)) {
@@ -35,6 +35,7 @@ public class ProblemsPart {
                 broker.send(Topics.REVEAL, new Selection(view.document(), target));
             }
         });
+        view.setSettings(org.trimwright.ui.internal.prefs.UiPreferences.load().settings());
         if (app.getContext().get(Topics.LAST_SELECTION) instanceof Selection s) {
             view.show(s.document());
         }
@@ -45,6 +46,14 @@ public class ProblemsPart {
     void activeDocument(@UIEventTopic(Topics.ACTIVE_DOCUMENT) Selection s) {
         if (view != null && s.document() != view.document()) {
             view.show(s.document());
+        }
+    }
+
+    @Inject
+    @Optional
+    void preferences(@UIEventTopic(Topics.PREFERENCES_CHANGED) org.trimwright.ui.internal.prefs.UiPreferences p) {
+        if (view != null) {
+            view.setSettings(p.settings());
         }
     }
 
