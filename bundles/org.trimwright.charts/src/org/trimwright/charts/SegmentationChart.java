@@ -22,8 +22,9 @@ import org.trimwright.engine.mismatch.sizing.SegmentationRow;
  * Segmentation advice as cost against risk: one point per split M (M unary MSBs, n - M binary LSBs) with
  * x = decoder plus switch cost in NAND2 equivalents and y = P(non-monotonic) by the union bound over distinct
  * steps (exact Gaussian per step), on a log scale. Splits that are monotonic by construction (risk 0) cannot sit on
- * a log axis; they are named in the subtitle. Series 0 holds every split with non-zero risk, series 1 the cheapest
- * split meeting the limits (when it has non-zero risk).
+ * a log axis; they are named in the subtitle. Risks below {@link #FLOOR} (including those that underflow to 0) are
+ * drawn at the floor and say so in their label. Series 0 holds every split not monotonic by construction, series 1
+ * the cheapest split meeting the limits (when it is drawn).
  */
 public final class SegmentationChart {
 
@@ -49,9 +50,12 @@ public final class SegmentationChart {
         } else {
             data = dataset(advice);
             subtitle = subtitle(advice, r.mismatch().get());
+            double top = FLOOR;
             for (SegmentationRow row : advice.rows()) {
-                if (row.pNonMonotonicBound() > 0) {
-                    XYTextAnnotation a = new XYTextAnnotation("M=" + row.unaryBits(), row.cost(),
+                if (!row.monotonicGuaranteed()) {
+                    top = Math.max(top, row.pNonMonotonicBound());
+                    XYTextAnnotation a = new XYTextAnnotation("M=" + row.unaryBits()
+                            + (row.pNonMonotonicBound() < FLOOR ? " (<" + FLOOR + ")" : ""), row.cost(),
                             Math.max(row.pNonMonotonicBound(), FLOOR));
                     a.setFont(ChartLook.TICK);
                     a.setPaint(ChartLook.SLATE);
@@ -60,6 +64,7 @@ public final class SegmentationChart {
                 }
             }
             double maxRisk = r.mismatch().get().limits().maxNonMonotonic();
+            risk.setRange(FLOOR / 10, Math.min(10, Math.max(top, maxRisk) * 100));
             if (maxRisk > 0) {
                 ValueMarker limit = new ValueMarker(maxRisk, ChartLook.PLUM, ChartLook.dashed());
                 limit.setLabel("limit " + maxRisk);
@@ -86,7 +91,7 @@ public final class SegmentationChart {
         XYSeries all = new XYSeries("split M (cost, risk)", false, true);
         XYSeries best = new XYSeries("cheapest split meeting the limits", false, true);
         for (SegmentationRow row : advice.rows()) {
-            if (row.pNonMonotonicBound() > 0) {
+            if (!row.monotonicGuaranteed()) {
                 double y = Math.max(row.pNonMonotonicBound(), FLOOR);
                 all.add(row.cost(), y, false);
                 if (row.unaryBits() == advice.cheapestMeeting()) {
@@ -102,15 +107,16 @@ public final class SegmentationChart {
 
     private static String subtitle(SegmentationAdvice advice, MismatchReport m) {
         List<String> safe = new ArrayList<>();
+        // risk 0 without a guarantee is an underflow of the union bound, drawn at the floor
         for (SegmentationRow row : advice.rows()) {
-            if (row.pNonMonotonicBound() <= 0) {
+            if (row.monotonicGuaranteed()) {
                 safe.add("M=" + row.unaryBits());
             }
         }
         String s = "cost = decoder NAND2 eq. + switches; risk: exact Gaussian P(step < 0) per distinct step, "
                 + "union bound";
         if (!safe.isEmpty()) {
-            s += "; monotonic by construction (risk 0, not drawn): " + String.join(", ", safe);
+            s += "; monotonic by construction (not drawn): " + String.join(", ", safe);
         }
         s += advice.cheapestMeeting() >= 0 ? "; cheapest meeting the limits: M=" + advice.cheapestMeeting()
                 : "; no split meets the limits";

@@ -23,6 +23,7 @@ public final class Main {
         m.put("analyze", new AnalyzeCommand());
         m.put("check", new CheckCommand());
         m.put("diff", new DiffCommand());
+        m.put("export", new ExportCommand());
         return m;
     }
 
