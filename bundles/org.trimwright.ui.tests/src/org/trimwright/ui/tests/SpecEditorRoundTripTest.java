@@ -235,6 +235,9 @@ class SpecEditorRoundTripTest {
         Ui.pumpUntil("analysis rules after the edit", problems::isAnalysed, WAIT);
         assertTrue(problems.rows().stream().anyMatch(r -> r.finding().message().contains("overlap")),
                 problems.rows().toString());
+        Ui.settle(100);
+        assertTrue(problems.isAnalysed() && problems.summaryText().contains("analysis rules,"),
+                problems.summaryText());
         Ui.screenshot(shell, "04-findings-overlap");
 
         editor.select(doc.spec());

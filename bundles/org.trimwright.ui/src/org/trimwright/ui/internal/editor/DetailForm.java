@@ -277,6 +277,9 @@ public final class DetailForm {
         if (t.isDisposed() || document == null) {
             return;
         }
+        if (t.getData("trimwright.bad") == null && t.getText().equals(display(owner, a))) {
+            return;
+        }
         Object value;
         try {
             value = read(owner, a, t.getText());

@@ -98,6 +98,10 @@ public final class ProblemsView {
         return table;
     }
 
+    public String summaryText() {
+        return summary.getText();
+    }
+
     public List<Row> rows() {
         return List.copyOf(rows);
     }
