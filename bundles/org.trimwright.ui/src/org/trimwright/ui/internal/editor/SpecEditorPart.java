@@ -12,6 +12,7 @@ import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.e4.ui.model.application.ui.basic.MWindow;
 import org.eclipse.e4.core.services.events.IEventBroker;
+import org.eclipse.e4.ui.workbench.UIEvents;
 import org.eclipse.e4.ui.workbench.modeling.EPartService;
 import org.eclipse.e4.ui.workbench.modeling.ISaveHandler;
 import org.eclipse.jface.dialogs.MessageDialog;
@@ -67,6 +68,7 @@ public class SpecEditorPart {
             part.setDirty(d.isDirty());
             part.setLabel(d.file().getFileName().toString());
             part.setTooltip(d.file().toString());
+            broker.post(UIEvents.REQUEST_ENABLEMENT_UPDATE_TOPIC, UIEvents.ALL_ELEMENT_ID);
         });
         window.getContext().set(ISaveHandler.class, new SavePrompt(parent.getShell()));
         Field first = firstAnalysedField(document.spec());

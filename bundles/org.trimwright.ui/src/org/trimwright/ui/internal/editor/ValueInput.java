@@ -39,7 +39,8 @@ public final class ValueInput {
         String t = text == null ? "" : text.strip();
         if (kind == Kind.INTEGER) {
             try {
-                return t.startsWith("0x") || t.startsWith("0X") ? Long.parseLong(t.substring(2), 16) : Long.parseLong(t);
+                boolean hex = t.startsWith("0x") || t.startsWith("0X");
+                return hex ? Long.parseLong(t.substring(2), 16) : Long.parseLong(t);
             } catch (NumberFormatException e) {
                 throw new IllegalArgumentException(label + ": '" + text + "' is not a whole number (e.g. 12 or 0x0C)");
             }
