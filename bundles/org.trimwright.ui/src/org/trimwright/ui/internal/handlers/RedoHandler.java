@@ -1,0 +1,25 @@
+package org.trimwright.ui.internal.handlers;
+
+import org.eclipse.e4.core.di.annotations.CanExecute;
+import org.eclipse.e4.core.di.annotations.Execute;
+import org.eclipse.e4.core.di.annotations.Optional;
+import org.trimwright.ui.internal.Topics;
+import org.trimwright.ui.internal.editor.SpecEditorPart;
+
+import jakarta.inject.Named;
+
+/** Redoes the last undone edit of the active spec editor. */
+public class RedoHandler {
+
+    @CanExecute
+    boolean can(@Optional @Named(Topics.ACTIVE_EDITOR) SpecEditorPart editor) {
+        return editor != null && editor.document() != null && editor.document().canRedo();
+    }
+
+    @Execute
+    void execute(@Optional @Named(Topics.ACTIVE_EDITOR) SpecEditorPart editor) {
+        if (can(editor)) {
+            editor.document().redo();
+        }
+    }
+}
