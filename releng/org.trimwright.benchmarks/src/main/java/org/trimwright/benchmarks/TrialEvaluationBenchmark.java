@@ -25,7 +25,9 @@ import org.trimwright.engine.mismatch.montecarlo.TrialSampler;
  * <li>{@code *Trial}: draw a trial ({@link TrialSampler}, one normal per element) and evaluate it;</li>
  * <li>{@code *Evaluate}: evaluate a fixed pool of {@value #POOL} trials drawn once in the setup (evaluation
  * cost alone);</li>
- * <li>{@code sampleOnly}: drawing alone.</li>
+ * <li>{@code sampleOnly}: drawing alone;</li>
+ * <li>{@code leanAllCodes*}: the same with {@link LeanAllCodesEvaluator}, an O(2^n) all-codes walk (prefix sums
+ * instead of the engine reference's per-code summation of every element that is on).</li>
  * </ul>
  * Every invocation handles exactly {@value #POOL} trials and counts as {@value #POOL} operations: figures are trials
  * per second. The setup checks that both evaluators give the same figures on the pool (else the run fails).
@@ -41,6 +43,7 @@ public class TrialEvaluationBenchmark {
     private TrialSampler sampler;
     private StructuralEvaluator structural;
     private AllCodesEvaluator allCodes;
+    private LeanAllCodesEvaluator leanAllCodes;
     private GaussianSource gauss;
     private double[][] unaryPool;
     private double[][] binaryPool;
@@ -54,6 +57,7 @@ public class TrialEvaluationBenchmark {
         sampler = new TrialSampler(array);
         structural = new StructuralEvaluator(array);
         allCodes = new AllCodesEvaluator(array);
+        leanAllCodes = new LeanAllCodesEvaluator(array.unaryCount(), array.binaryBits());
         gauss = new GaussianSource(MonteCarloField.SEED);
         unary = new double[array.unaryCount()];
         binary = new double[array.binaryBits()];
@@ -61,11 +65,14 @@ public class TrialEvaluationBenchmark {
         binaryPool = new double[POOL][array.binaryBits()];
         TrialMetrics a = new TrialMetrics();
         TrialMetrics b = new TrialMetrics();
+        TrialMetrics c = new TrialMetrics();
         for (int t = 0; t < POOL; t++) {
             sampler.draw(gauss, unaryPool[t], binaryPool[t]);
             structural.evaluate(unaryPool[t], binaryPool[t], a);
             allCodes.evaluate(unaryPool[t], binaryPool[t], b);
+            leanAllCodes.evaluate(unaryPool[t], binaryPool[t], c);
             check(t, a, b);
+            check(t, c, b);
         }
     }
 
@@ -138,6 +145,29 @@ public class TrialEvaluationBenchmark {
         for (int t = 0; t < POOL; t++) {
             sampler.draw(gauss, unary, binary);
             s += unary[t % unary.length] + binary[t % binary.length];
+        }
+        return s;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(POOL)
+    public double leanAllCodesTrial() {
+        double s = 0;
+        for (int t = 0; t < POOL; t++) {
+            sampler.draw(gauss, unary, binary);
+            leanAllCodes.evaluate(unary, binary, metrics);
+            s += digest();
+        }
+        return s;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(POOL)
+    public double leanAllCodesEvaluate() {
+        double s = 0;
+        for (int t = 0; t < POOL; t++) {
+            leanAllCodes.evaluate(unaryPool[t], binaryPool[t], metrics);
+            s += digest();
         }
         return s;
     }
