@@ -17,7 +17,11 @@ import org.trimwright.engine.logic.GateLibrary;
 import org.trimwright.engine.mismatch.MismatchAnalysis;
 import org.trimwright.engine.mismatch.MismatchReport;
 import org.trimwright.engine.mismatch.montecarlo.MonteCarloOptions;
+import org.trimwright.engine.mismatch.sizing.SegmentationAdvice;
+import org.trimwright.engine.mismatch.sizing.SegmentationAdvisor;
 import org.trimwright.engine.mismatch.sizing.SizingRequest;
+import org.trimwright.engine.mismatch.sizing.SizingResult;
+import org.trimwright.engine.mismatch.sizing.TrimSizing;
 import org.trimwright.model.AnalogTarget;
 import org.trimwright.model.Field;
 
@@ -26,6 +30,11 @@ public final class FieldAnalyzer {
 
     /** Monte Carlo trials kept whole for the transfer-curve envelope of charts. */
     public static final int ENVELOPE_TRIALS = 200;
+    /**
+     * Monte Carlo trials per split of the segmentation advice (n + 1 splits are sampled, so fewer than the field's
+     * own run; the advice's union bounds and DNL sigmas are exact regardless).
+     */
+    public static final long ADVICE_TRIALS = 20_000;
 
     private FieldAnalyzer() {
     }
@@ -53,11 +62,15 @@ public final class FieldAnalyzer {
         FieldCoding c = in.coding();
         MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
                 (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
-        MismatchReport report = MismatchAnalysis.run(c, mm.model(), mm.limits(), options, splitCost(coding, c, settings.gateLibrary()),
-                sizing);
+        MismatchReport report = MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
+        SegmentationAdvice advice = SegmentationAdvisor.advise(c.bits(), c.signedFormat(), mm.model(), mm.limits(),
+                options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
+                splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ);
+        SizingResult sized = sizing == null ? null : TrimSizing.size(sizing.withField(report));
+        report = report.with(advice, sized);
         Optional<ExactMonotonicity> exact = Optional.empty();
         Optional<ExactDnlYield> exactDnl = Optional.empty();
-        if (ExactYields.supports(c.scheme()) && exactApplies(mm)) {
+        if (ExactYields.supports(c.scheme()) && exactApplies(c, mm)) {
             ElementSigmas sigmas = ElementSigmas.forField(c, mm.model().unitSigma(), mm.model().switchSigma());
             exact = Optional.of(ExactYields.monotonicity(sigmas));
             exactDnl = Optional.of(ExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb()));
@@ -65,9 +78,13 @@ public final class FieldAnalyzer {
         return new FieldReport(in, settings, coding, Optional.of(report), exact, exactDnl);
     }
 
-    /** The exact methods take independent Gaussian elements without gradients. */
-    private static boolean exactApplies(MismatchInputs mm) {
-        return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0;
+    /**
+     * The exact methods take independent Gaussian elements without gradients, in the array's own code order
+     * (sign-magnitude fields steer one magnitude array both ways and are not covered).
+     */
+    static boolean exactApplies(FieldCoding c, MismatchInputs mm) {
+        return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0
+                && c.signedFormat() != org.trimwright.engine.coding.SignedFormat.SIGN_MAGNITUDE;
     }
 
     private static IntToDoubleFunction splitCost(CodingReport coding, FieldCoding c, GateLibrary lib) {

@@ -3,6 +3,7 @@ package org.trimwright.cli;
 import java.util.Map;
 
 import org.trimwright.analysis.FieldInputs;
+import org.trimwright.analysis.FieldReport;
 import org.trimwright.engine.coding.FieldCoding;
 import org.trimwright.engine.coding.StepRow;
 import org.trimwright.engine.design.CodingReport;
@@ -18,9 +19,18 @@ final class AnalyzeJson {
     private AnalyzeJson() {
     }
 
-    static String write(FieldInputs in, CodingReport r) {
+    /** Above this many output bits in the whole step table (codes x outputs), {@code outputs} strings are omitted. */
+    static final long OUTPUT_BITS_LIMIT = 1L << 22;
+    /** Above this many gates the gate-level Verilog is omitted ({@code verilogGates}: null). */
+    static final int GATE_VERILOG_LIMIT = 20_000;
+
+    static String write(FieldReport report) {
+        FieldInputs in = report.inputs();
+        CodingReport r = report.coding();
         JsonWriter w = new JsonWriter().beginObject();
         field(w, in, r);
+        w.key("settings").beginObject().field("trials", report.settings().trials())
+                .field("seed", report.settings().seed()).field("maxFanIn", report.settings().maxFanIn()).endObject();
         codes(w, r);
         w.key("cost");
         cost(w, r.cost());
@@ -31,7 +41,8 @@ final class AnalyzeJson {
         w.endArray();
         glitch(w, r);
         w.field("verilog", r.verilog());
-        w.field("verilogGates", r.gateVerilog());
+        w.field("verilogGates", r.netlist().gates().size() <= GATE_VERILOG_LIMIT ? r.gateVerilog() : null);
+        MismatchJson.write(w, report);
         return w.endObject().toJson();
     }
 
@@ -58,6 +69,7 @@ final class AnalyzeJson {
 
     private static void codes(JsonWriter w, CodingReport r) {
         int k = r.stepTable().map().layout().size();
+        boolean withOutputs = (long) k * r.stepTable().size() <= OUTPUT_BITS_LIMIT;
         w.key("codes").beginArray();
         for (StepRow row : r.stepTable().rows()) {
             w.beginObject()
@@ -66,14 +78,20 @@ final class AnalyzeJson {
                     .field("signedSteps", row.signedSteps())
                     .field("level", row.level())
                     .field("value", row.value())
-                    .field("outputs", row.outputBits(k))
+                    .field("outputs", withOutputs ? row.outputBits(k) : null)
                     .field("unitsInUse", row.unitsInUse())
                     .field("tap", row.tap())
-                    .key("closedSwitches").beginArray();
-            for (String s : row.closedSwitches()) {
-                w.value(s);
+                    .key("closedSwitches");
+            if (withOutputs) {
+                w.beginArray();
+                for (String s : row.closedSwitches()) {
+                    w.value(s);
+                }
+                w.endArray();
+            } else {
+                w.nullValue();
             }
-            w.endArray().endObject();
+            w.endObject();
         }
         w.endArray();
     }

@@ -4,6 +4,7 @@ import java.io.PrintStream;
 import java.util.Map;
 
 import org.trimwright.analysis.FieldInputs;
+import org.trimwright.analysis.FieldReport;
 import org.trimwright.engine.coding.FieldCoding;
 import org.trimwright.engine.coding.StepRow;
 import org.trimwright.engine.design.CodingReport;
@@ -22,7 +23,9 @@ final class AnalyzeText {
     private AnalyzeText() {
     }
 
-    static void print(FieldInputs in, CodingReport r, boolean verilog, PrintStream out) {
+    static void print(FieldReport report, boolean verilog, PrintStream out) {
+        FieldInputs in = report.inputs();
+        CodingReport r = report.coding();
         FieldCoding c = in.coding();
         out.printf("Field %s  (%s)%n", r.name(), in.path());
         out.printf("  %d bits, %s%s, %s, %s drive%s%n", c.bits(), c.scheme().key(),
@@ -45,6 +48,7 @@ final class AnalyzeText {
         }
         out.println();
         glitch(r, in, out);
+        MismatchText.print(report, out);
         if (verilog) {
             out.println();
             out.println(r.verilog());

@@ -11,6 +11,13 @@ import net.jqwik.api.constraints.IntRange;
 
 class CodingPropertiesTest {
 
+    /** Runs this class's jqwik properties (tycho-surefire does not discover them; see PropertyRunner). */
+    @org.junit.jupiter.api.Test
+    void jqwikPropertiesHold() {
+        org.trimwright.engine.testing.PropertyRunner.assertAllHold(CodingPropertiesTest.class);
+    }
+
+
     /** Code of the given level (the inverse of CodeMap.level). */
     private static int codeAtLevel(CodeMap map, int level) {
         for (int c = 0; c < map.coding().codeCount(); c++) {

@@ -15,6 +15,13 @@ import org.trimwright.engine.coding.FieldCoding;
 
 class ExactMonotonicityTest {
 
+    /** Runs this class's jqwik properties (tycho-surefire does not discover them; see PropertyRunner). */
+    @org.junit.jupiter.api.Test
+    void jqwikPropertiesHold() {
+        org.trimwright.engine.testing.PropertyRunner.assertAllHold(ExactMonotonicityTest.class);
+    }
+
+
     /** 99.9% two-sided normal quantile: the brute-force runs below use fixed seeds and several fields. */
     private static final double Z999 = 3.2905;
     private static final NormalDistribution STANDARD = new NormalDistribution(0.0, 1.0);

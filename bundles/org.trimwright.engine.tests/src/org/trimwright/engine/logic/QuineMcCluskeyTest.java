@@ -16,6 +16,13 @@ import org.junit.jupiter.api.Test;
 
 class QuineMcCluskeyTest {
 
+    /** Runs this class's jqwik properties (tycho-surefire does not discover them; see PropertyRunner). */
+    @org.junit.jupiter.api.Test
+    void jqwikPropertiesHold() {
+        org.trimwright.engine.testing.PropertyRunner.assertAllHold(QuineMcCluskeyTest.class);
+    }
+
+
     /**
      * Independent reference: the fewest products covering a 4-input function, by breadth-first search over the
      * covered-minterm sets reachable with implicants (every cube inside the ON-set, not only primes).

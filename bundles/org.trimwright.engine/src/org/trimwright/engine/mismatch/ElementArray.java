@@ -3,6 +3,7 @@ package org.trimwright.engine.mismatch;
 import org.trimwright.engine.coding.CodingScheme;
 import org.trimwright.engine.coding.FieldCoding;
 import org.trimwright.engine.coding.SignedFormat;
+import org.trimwright.engine.mismatch.sequence.SequenceKind;
 import org.trimwright.engine.mismatch.sequence.SwitchingSequences;
 
 /**
@@ -36,7 +37,7 @@ public final class ElementArray {
     private final double[] binaryMean;
     private final double[] binarySigma;
 
-    private ElementArray(FieldCoding coding, int unaryBits, int binaryBits, ElementModel model) {
+    private ElementArray(FieldCoding coding, int unaryBits, int binaryBits, ElementModel model, int[] givenSequence) {
         this.coding = coding;
         this.unaryBits = unaryBits;
         this.binaryBits = binaryBits;
@@ -44,10 +45,15 @@ public final class ElementArray {
         this.signMagnitude = coding.signedFormat() == SignedFormat.SIGN_MAGNITUDE;
         this.select = coding.scheme().isSelect();
         double w = 1 << binaryBits;
-        this.sequence = select
-                ? SwitchingSequences.build(org.trimwright.engine.mismatch.sequence.SequenceKind.SEQUENTIAL,
-                        unaryCount, model.gradient())
-                : SwitchingSequences.build(model.sequence(), unaryCount, model.gradient());
+        if (givenSequence != null && !select) {
+            if (givenSequence.length != unaryCount) {
+                throw new IllegalArgumentException("sequence must have " + unaryCount + " slots");
+            }
+            this.sequence = givenSequence.clone();
+        } else {
+            this.sequence = SwitchingSequences.build(select ? SequenceKind.SEQUENTIAL : model.sequence(), unaryCount,
+                    model.gradient());
+        }
         this.unaryMean = new double[unaryCount];
         for (int i = 0; i < unaryCount; i++) {
             double x = Gradient.coordinate(sequence[i], unaryCount);
@@ -64,6 +70,14 @@ public final class ElementArray {
 
     /** The array of {@code coding} with the mismatch of {@code model}. */
     public static ElementArray of(FieldCoding coding, ElementModel model) {
+        return of(coding, model, null);
+    }
+
+    /**
+     * The array with a given unary switching sequence ({@code sequence[i]} = slot of the i-th switched element;
+     * null: the model's sequence). Select strings keep their physical order.
+     */
+    public static ElementArray of(FieldCoding coding, ElementModel model, int[] sequence) {
         int n = coding.signedFormat() == SignedFormat.SIGN_MAGNITUDE ? coding.bits() - 1 : coding.bits();
         int m;
         CodingScheme scheme = coding.scheme();
@@ -83,7 +97,7 @@ public final class ElementArray {
             default:
                 throw new IllegalStateException(scheme.name());
         }
-        return new ElementArray(coding, m, n - m, model);
+        return new ElementArray(coding, m, n - m, model, sequence);
     }
 
     public FieldCoding coding() {

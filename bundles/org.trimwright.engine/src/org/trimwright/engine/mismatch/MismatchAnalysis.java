@@ -27,6 +27,8 @@ import org.trimwright.engine.mismatch.sizing.TrimSizing;
  */
 public final class MismatchAnalysis {
 
+    /** Envelope work limit (trials times levels); wide fields get fewer envelope trials (stated in the report). */
+    public static final long ENVELOPE_WORK = 5_000_000L;
     /** Bins of the max|DNL| / max|INL| histograms. */
     public static final int HISTOGRAM_BINS = 50;
 
@@ -60,7 +62,8 @@ public final class MismatchAnalysis {
         long dnlPass = Math.round(dnlYield * mc.trials());
         MismatchReport.DnlSummary dnl = new MismatchReport.DnlSummary(
                 "DNL = step - 1 in nominal LSB; sigma exact per transition, yield = P(max|DNL| < limit) by Monte Carlo",
-                worst.sigma(), worst.label(), limits.maxDnlLsb(), dnlYield, WilsonInterval.of(dnlPass, mc.trials(), 0.95),
+                worst.sigma(), worst.label(), limits.maxDnlLsb(), dnlYield,
+                WilsonInterval.of(dnlPass, mc.trials(), 0.95),
                 mc.mean(Metric.DNL), mc.mean(Metric.DNL_ENDPOINT), mc.quantile(Metric.DNL, limits.targetYield()));
 
         MismatchReport.InlSummary inl = new MismatchReport.InlSummary(
@@ -143,7 +146,8 @@ public final class MismatchAnalysis {
         double[] nominal = codes.transfer(u, b);
         double[] systematic = codes.inl(nominal)[0];
         int levels = codes.levels();
-        int env = options.envelopeTrials();
+        int env = (int) Math.min(options.envelopeTrials(), Math.max(10, ENVELOPE_WORK / levels));
+        env = (int) Math.min(env, options.trials());
         double[] dnlMin = new double[levels];
         double[] dnlMax = new double[levels];
         double[] inlMin = new double[levels];

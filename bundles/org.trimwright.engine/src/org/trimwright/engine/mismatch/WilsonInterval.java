@@ -24,6 +24,8 @@ public final class WilsonInterval {
         double denom = 1 + z2 / n;
         double centre = (p + z2 / (2.0 * n)) / denom;
         double half = z / denom * Math.sqrt(p * (1 - p) / n + z2 / (4.0 * n * n));
-        return new double[] {Math.max(0.0, centre - half), Math.min(1.0, centre + half)};
+        double low = k == 0 ? 0.0 : Math.max(0.0, centre - half);
+        double high = k == n ? 1.0 : Math.min(1.0, centre + half);
+        return new double[] {low, high};
     }
 }

@@ -138,6 +138,9 @@ public final class SpecFiles {
             return "DOCTYPE declarations are not allowed in spec files (they could pull in external entities"
                     + " or expand entities without bound): " + m;
         }
+        if (m.contains("must start and end within the same entity") || m.contains("Premature end of file")) {
+            return "the file ends before its XML is complete (truncated?): " + m;
+        }
         return m;
     }
 

@@ -58,23 +58,27 @@ public final class AllCodesEvaluator {
         int n = coding.bits();
         int half = 1 << (n - 1);
         double[] v = new double[levels];
+        double[] onSum = new double[unary + 1];
+        for (int k = 0; k < unary; k++) {
+            onSum[k + 1] = onSum[k] + unaryValues[k];
+        }
         for (int reg = 0; reg < (1 << n); reg++) {
             int code = coding.scheme() == CodingScheme.GRAY ? grayToBinary(reg) : reg;
             int s = coding.signedFormat().signedValue(code, n);
             double value;
             switch (coding.signedFormat()) {
                 case SIGN_MAGNITUDE:
-                    double mag = magnitude(code & (half - 1), unaryValues, binaryValues);
+                    double mag = magnitude(code & (half - 1), onSum, binaryValues);
                     value = (code & half) != 0 ? -mag : mag;
                     break;
                 case TWOS_COMPLEMENT:
-                    value = magnitude(code ^ half, unaryValues, binaryValues) - half;
+                    value = magnitude(code ^ half, onSum, binaryValues) - half;
                     break;
                 case OFFSET_BINARY:
-                    value = magnitude(code, unaryValues, binaryValues) - half;
+                    value = magnitude(code, onSum, binaryValues) - half;
                     break;
                 default:
-                    value = magnitude(code, unaryValues, binaryValues);
+                    value = magnitude(code, onSum, binaryValues);
                     break;
             }
             v[s - minSigned] = value;
@@ -82,15 +86,11 @@ public final class AllCodesEvaluator {
         return v;
     }
 
-    private double magnitude(int level, double[] unaryValues, double[] binaryValues) {
+    /** Thermometer outputs k &lt; u are on: their sum is onSum[u] (running sums of the unary elements). */
+    private double magnitude(int level, double[] onSum, double[] binaryValues) {
         int u = level >>> weightShift;
         int r = level & ((1 << weightShift) - 1);
-        double sum = 0;
-        for (int k = 0; k < unary; k++) {
-            if (u > k) {
-                sum += unaryValues[k];
-            }
-        }
+        double sum = onSum[u];
         for (int j = 0; j < bits; j++) {
             if ((r >>> j & 1) != 0) {
                 sum += binaryValues[j];

@@ -66,68 +66,58 @@ public final class StructuralEvaluator {
     /** Evaluates one trial: {@code unaryValues} in switching order, {@code binaryValues} by bit. */
     public void evaluate(double[] unaryValues, double[] binaryValues, TrialMetrics out) {
         double sumB = 0;
-        double minStep = Double.POSITIVE_INFINITY;
-        double maxStep = Double.NEGATIVE_INFINITY;
+        double minStep = bits > 0 ? binaryValues[0] : Double.POSITIVE_INFINITY;
+        double maxStep = bits > 0 ? binaryValues[0] : Double.NEGATIVE_INFINITY;
         double s0 = 0;
         double s1 = 0;
         for (int j = 0; j < bits; j++) {
             double b = binaryValues[j];
             double step = b - sumB;
-            if (step < minStep) {
-                minStep = step;
-            }
-            if (step > maxStep) {
-                maxStep = step;
-            }
+            minStep = lower(minStep, step);
+            maxStep = upper(maxStep, step);
             sumB += b;
             s0 += c0Binary[j] * b;
             s1 += c1Binary[j] * b;
         }
         double sumU = 0;
-        for (int i = 0; i < unary; i++) {
-            double x = unaryValues[i];
-            double step = x - sumB;
-            if (step < minStep) {
-                minStep = step;
+        if (unary > 0) {
+            double uMin = unaryValues[0];
+            double uMax = unaryValues[0];
+            for (int i = 0; i < unary; i++) {
+                double x = unaryValues[i];
+                uMin = lower(uMin, x);
+                uMax = upper(uMax, x);
+                sumU += x;
+                s0 += c0Unary[i] * x;
+                s1 += c1Unary[i] * x;
             }
-            if (step > maxStep) {
-                maxStep = step;
-            }
-            sumU += x;
-            s0 += c0Unary[i] * x;
-            s1 += c1Unary[i] * x;
+            minStep = Math.min(minStep, uMin - sumB);
+            maxStep = Math.max(maxStep, uMax - sumB);
         }
         double gEp = (sumU + sumB) / top;
         double beta = s1 / slopeDenominator;
         double alpha = originFit ? 0.0 : s0 / points - beta * centre;
 
-        double rMaxEp = 0;
-        double rMinEp = 0;
-        double rMaxBf = 0;
-        double rMinBf = 0;
-        double rMaxAbs = 0;
-        double rMinAbs = 0;
+        // binary part: max_r and min_r of sum_j bit_j(r) d_j are sum max(0, d_j) = (sum d + sum |d|) / 2 and
+        // sum min(0, d_j) = (sum d - sum |d|) / 2
+        double sumEp = 0;
+        double absEp = 0;
+        double sumBf = 0;
+        double absBf = 0;
+        double sumAbs = 0;
+        double absAbs = 0;
         for (int j = 0; j < bits; j++) {
             double b = binaryValues[j];
             double bw = binaryWeight[j];
             double dEp = b - gEp * bw;
             double dBf = b - beta * bw;
             double dAbs = b - bw;
-            if (dEp > 0) {
-                rMaxEp += dEp;
-            } else {
-                rMinEp += dEp;
-            }
-            if (dBf > 0) {
-                rMaxBf += dBf;
-            } else {
-                rMinBf += dBf;
-            }
-            if (dAbs > 0) {
-                rMaxAbs += dAbs;
-            } else {
-                rMinAbs += dAbs;
-            }
+            sumEp += dEp;
+            absEp += Math.abs(dEp);
+            sumBf += dBf;
+            absBf += Math.abs(dBf);
+            sumAbs += dAbs;
+            absAbs += Math.abs(dAbs);
         }
         double uMaxEp = 0;
         double uMinEp = 0;
@@ -144,32 +134,36 @@ public final class StructuralEvaluator {
             double dEp = prefix - stepEp * u;
             double dBf = prefix - stepBf * u;
             double dAbs = prefix - weight * u;
-            if (dEp > uMaxEp) {
-                uMaxEp = dEp;
-            }
-            if (dEp < uMinEp) {
-                uMinEp = dEp;
-            }
-            if (dBf > uMaxBf) {
-                uMaxBf = dBf;
-            }
-            if (dBf < uMinBf) {
-                uMinBf = dBf;
-            }
-            if (dAbs > uMaxAbs) {
-                uMaxAbs = dAbs;
-            }
-            if (dAbs < uMinAbs) {
-                uMinAbs = dAbs;
-            }
+            uMaxEp = upper(uMaxEp, dEp);
+            uMinEp = lower(uMinEp, dEp);
+            uMaxBf = upper(uMaxBf, dBf);
+            uMinBf = lower(uMinBf, dBf);
+            uMaxAbs = upper(uMaxAbs, dAbs);
+            uMinAbs = lower(uMinAbs, dAbs);
         }
-        double epWorst = Math.max(Math.abs(uMaxEp + rMaxEp), Math.abs(uMinEp + rMinEp));
-        double bfWorst = Math.max(Math.abs(uMaxBf + rMaxBf - alpha), Math.abs(uMinBf + rMinBf - alpha));
+        double epWorst = Math.max(Math.abs(uMaxEp + 0.5 * (sumEp + absEp)), Math.abs(uMinEp + 0.5 * (sumEp - absEp)));
+        double bfWorst = Math.max(Math.abs(uMaxBf + 0.5 * (sumBf + absBf) - alpha),
+                Math.abs(uMinBf + 0.5 * (sumBf - absBf) - alpha));
         out.inlEndpoint = gEp > 0 ? epWorst / gEp : Double.POSITIVE_INFINITY;
         out.inlBestFit = beta > 0 ? bfWorst / beta : Double.POSITIVE_INFINITY;
-        out.inlAbsolute = Math.max(Math.abs(uMaxAbs + rMaxAbs), Math.abs(uMinAbs + rMinAbs));
+        out.inlAbsolute = Math.max(Math.abs(uMaxAbs + 0.5 * (sumAbs + absAbs)),
+                Math.abs(uMinAbs + 0.5 * (sumAbs - absAbs)));
         out.maxDnl = Math.max(maxStep - 1.0, 1.0 - minStep);
         out.maxDnlEndpoint = gEp > 0 ? Math.max(maxStep / gEp - 1.0, 1.0 - minStep / gEp) : Double.POSITIVE_INFINITY;
         out.nonMonotonic = minStep < 0;
+    }
+
+    /**
+     * Branch-free maximum (a + b + |a - b|) / 2, exact to a few ulps for finite values. The running extremes of random
+     * walks change at unpredictable trials; a compare-and-branch there mispredicts often and cost about a third of
+     * the trial time (measured).
+     */
+    private static double upper(double a, double b) {
+        return 0.5 * (a + b + Math.abs(a - b));
+    }
+
+    /** Branch-free minimum (a + b - |a - b|) / 2. */
+    private static double lower(double a, double b) {
+        return 0.5 * (a + b - Math.abs(a - b));
     }
 }

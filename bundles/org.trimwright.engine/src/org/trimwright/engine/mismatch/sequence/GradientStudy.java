@@ -24,7 +24,7 @@ import org.trimwright.engine.mismatch.montecarlo.TrialMetrics;
 public record GradientStudy(double gradientLinear, double gradientQuadratic, boolean reference,
         List<SequenceRow> rows, String best) {
 
-    /** Reference gradient (relative error at the array edge) used when the model has none: 1 % linear, 1 % quadratic. */
+    /** Reference gradient used when the model has none: 1 % linear and 1 % quadratic at the array edge. */
     public static final Gradient REFERENCE = new Gradient(0.01, 0.01);
 
     public GradientStudy {
@@ -43,15 +43,15 @@ public record GradientStudy(double gradientLinear, double gradientQuadratic, boo
         String best = null;
         double bestValue = Double.POSITIVE_INFINITY;
         for (SequenceKind kind : kinds) {
-            TrialMetrics both = systematic(coding, model, g, kind);
-            TrialMetrics lin = systematic(coding, model, new Gradient(g.linear(), 0.0), kind);
-            TrialMetrics quad = systematic(coding, model, new Gradient(0.0, g.quadratic()), kind);
+            int[] slots = SwitchingSequences.build(kind, probe.unaryCount(), g);
+            TrialMetrics both = systematic(coding, model, g, slots);
+            TrialMetrics lin = systematic(coding, model, new Gradient(g.linear(), 0.0), slots);
+            TrialMetrics quad = systematic(coding, model, new Gradient(0.0, g.quadratic()), slots);
             if (kind == SequenceKind.SEQUENTIAL) {
                 sequentialEndpoint = both.inlEndpoint;
             }
             double improvement = both.inlEndpoint > 0 ? sequentialEndpoint / both.inlEndpoint
                     : (sequentialEndpoint > 0 ? Double.POSITIVE_INFINITY : 1.0);
-            int[] slots = ElementArray.of(coding, model.withLayout(g, kind)).sequence();
             rows.add(new SequenceRow(kind.key(), lin.inlEndpoint, quad.inlEndpoint, both.inlEndpoint, both.inlBestFit,
                     both.inlAbsolute, improvement, slots));
             if (both.inlEndpoint < bestValue - 1e-12) {
@@ -62,8 +62,8 @@ public record GradientStudy(double gradientLinear, double gradientQuadratic, boo
         return new GradientStudy(g.linear(), g.quadratic(), reference, rows, best);
     }
 
-    private static TrialMetrics systematic(FieldCoding coding, ElementModel model, Gradient g, SequenceKind kind) {
-        ElementArray array = ElementArray.of(coding, model.withLayout(g, kind));
+    private static TrialMetrics systematic(FieldCoding coding, ElementModel model, Gradient g, int[] slots) {
+        ElementArray array = ElementArray.of(coding, model.withLayout(g, SequenceKind.SEQUENTIAL), slots);
         double[] u = new double[array.unaryCount()];
         double[] b = new double[array.binaryBits()];
         array.meanValues(u, b);

@@ -9,11 +9,16 @@ import org.trimwright.engine.mismatch.Gradient;
  * elements, the endpoint INL of the unary levels is S_k - k S_P / P (in element units). For a linear-only and a
  * quadratic-only gradient of unit size we take the maxima L and Q of |that|; the combined INL is at most
  * |g1| L + |g2| Q (triangle inequality), which is what the search minimises (weights 1, 1 when no gradient is given).
+ * Above 4095 slots the optimised sequence is the mirrored tree.
  */
 public final class SwitchingSequences {
 
-    /** Above this many slots the pairwise-swap pass is skipped (its cost grows as P^3). */
-    private static final int SWAP_LIMIT = 512;
+    /** Above this many slots the search returns the mirrored tree (the greedy build costs P^2). */
+    private static final int GREEDY_LIMIT = 4095;
+    /** Above this many slots the pairwise-swap pass is skipped. */
+    private static final int SWAP_LIMIT = 1023;
+    /** Work limit of the swap search (inner-loop steps), which keeps it well under a second. */
+    private static final long SWAP_BUDGET = 50_000_000L;
 
     private SwitchingSequences() {
     }
@@ -125,8 +130,11 @@ public final class SwitchingSequences {
         }
         linMean /= slots;
         quadMean /= slots;
-        int[] greedy = greedy(slots, lin, quad, linMean, quadMean, w1, w2);
         int[] tree = mirroredTree(slots);
+        if (slots > GREEDY_LIMIT) {
+            return tree;
+        }
+        int[] greedy = greedy(slots, lin, quad, linMean, quadMean, w1, w2);
         int[] best = objective(greedy, lin, quad, w1, w2) <= objective(tree, lin, quad, w1, w2) ? greedy : tree;
         if (slots <= SWAP_LIMIT) {
             localSwaps(best, lin, quad, w1, w2);
@@ -162,24 +170,75 @@ public final class SwitchingSequences {
         return s;
     }
 
+    /**
+     * First-improvement pairwise swaps. Swapping sequence positions i &lt; j changes the prefix sums only at positions
+     * i..j-1, by e[s_j] - e[s_i]; with prefix and suffix maxima of |INL| the new objective costs O(j - i), and a swap
+     * whose untouched parts already reach the current objective is skipped at once.
+     */
     private static void localSwaps(int[] s, double[] lin, double[] quad, double w1, double w2) {
-        double current = objective(s, lin, quad, w1, w2);
+        int n = s.length;
+        double[] devL = new double[n];
+        double[] devQ = new double[n];
+        double[] preL = new double[n];
+        double[] preQ = new double[n];
+        double[] sufL = new double[n];
+        double[] sufQ = new double[n];
+        double current = deviations(s, lin, quad, devL, devQ, preL, preQ, sufL, sufQ, w1, w2);
+        long budget = SWAP_BUDGET;
         boolean improved = true;
-        for (int pass = 0; improved && pass < 20; pass++) {
+        for (int pass = 0; improved && pass < 20 && budget > 0; pass++) {
             improved = false;
-            for (int i = 0; i < s.length; i++) {
-                for (int j = i + 1; j < s.length; j++) {
-                    swap(s, i, j);
-                    double o = objective(s, lin, quad, w1, w2);
+            for (int i = 0; i < n && budget > 0; i++) {
+                for (int j = i + 1; j < n; j++) {
+                    double outL = Math.max(i > 0 ? preL[i - 1] : 0.0, sufL[j]);
+                    double outQ = Math.max(i > 0 ? preQ[i - 1] : 0.0, sufQ[j]);
+                    if (w1 * outL + w2 * outQ >= current - 1e-12) {
+                        continue;
+                    }
+                    double dl = lin[s[j]] - lin[s[i]];
+                    double dq = quad[s[j]] - quad[s[i]];
+                    double inL = 0;
+                    double inQ = 0;
+                    for (int k = i; k < j; k++) {
+                        inL = Math.max(inL, Math.abs(devL[k] + dl));
+                        inQ = Math.max(inQ, Math.abs(devQ[k] + dq));
+                    }
+                    budget -= j - i;
+                    double o = w1 * Math.max(outL, inL) + w2 * Math.max(outQ, inQ);
                     if (o < current - 1e-12) {
-                        current = o;
-                        improved = true;
-                    } else {
                         swap(s, i, j);
+                        current = deviations(s, lin, quad, devL, devQ, preL, preQ, sufL, sufQ, w1, w2);
+                        improved = true;
                     }
                 }
             }
         }
+    }
+
+    private static double deviations(int[] s, double[] lin, double[] quad, double[] devL, double[] devQ,
+            double[] preL, double[] preQ, double[] sufL, double[] sufQ, double w1, double w2) {
+        int n = s.length;
+        double totalL = 0;
+        double totalQ = 0;
+        for (int p : s) {
+            totalL += lin[p];
+            totalQ += quad[p];
+        }
+        double runL = 0;
+        double runQ = 0;
+        for (int k = 0; k < n; k++) {
+            runL += lin[s[k]];
+            runQ += quad[s[k]];
+            devL[k] = runL - (k + 1) * totalL / n;
+            devQ[k] = runQ - (k + 1) * totalQ / n;
+            preL[k] = Math.max(k > 0 ? preL[k - 1] : 0.0, Math.abs(devL[k]));
+            preQ[k] = Math.max(k > 0 ? preQ[k - 1] : 0.0, Math.abs(devQ[k]));
+        }
+        for (int k = n - 1; k >= 0; k--) {
+            sufL[k] = Math.max(k < n - 1 ? sufL[k + 1] : 0.0, Math.abs(devL[k]));
+            sufQ[k] = Math.max(k < n - 1 ? sufQ[k + 1] : 0.0, Math.abs(devQ[k]));
+        }
+        return w1 * preL[n - 1] + w2 * preQ[n - 1];
     }
 
     private static void swap(int[] s, int i, int j) {

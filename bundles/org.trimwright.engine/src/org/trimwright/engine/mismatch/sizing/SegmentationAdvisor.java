@@ -25,8 +25,8 @@ public final class SegmentationAdvisor {
 
     /** NAND2 equivalents charged per switch with its local driver (our assumption, adjustable). */
     public static final double DEFAULT_SWITCH_NAND2_EQ = 1.0;
-    /** Element draws per row at most; rows with many unary elements get fewer trials (at least MIN_TRIALS). */
-    public static final long DRAW_BUDGET = 200_000_000L;
+    /** Element draws per row at most (keeps the advice near a second); rows with many elements get fewer trials. */
+    public static final long DRAW_BUDGET = 20_000_000L;
     /** Fewest trials per row. */
     public static final long MIN_TRIALS = 10_000L;
 
@@ -63,7 +63,8 @@ public final class SegmentationAdvisor {
             rows.add(new SegmentationRow(m, bits - m, array.unaryCount(), switches, nand2, cost,
                     ta.worstSigma().sigma(), ta.monotonicByConstruction(), ta.unionBound(),
                     (double) nonMono / trials, ci[1], mc.yield(Metric.DNL, limits.maxDnlLsb()),
-                    mc.yield(Metric.INL_ENDPOINT, limits.maxInlLsb()), mc.yield(Metric.INL_BEST_FIT, limits.maxInlLsb()),
+                    mc.yield(Metric.INL_ENDPOINT, limits.maxInlLsb()),
+                    mc.yield(Metric.INL_BEST_FIT, limits.maxInlLsb()),
                     mc.yield(Metric.INL_ABSOLUTE, limits.maxInlLsb()), pass, trials, meets));
             if (meets && cost < cheapestCost) {
                 cheapestCost = cost;
