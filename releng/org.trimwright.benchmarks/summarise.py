@@ -2,7 +2,9 @@
 """Prints Markdown tables from a JMH JSON result file (java -jar benchmarks.jar -rf json -rff FILE).
 
 Usage: summarise.py FILE.json
-Scores are JMH's primary metric (mean over measurement iterations) with its 99.9 % error; ratios are of means.
+Scores are JMH's primary metric (mean over measurement iterations) with its 99.9 % error; "best" is the best single
+measurement iteration (highest throughput or lowest time), the figure least disturbed by other load on the machine.
+Ratios are of means.
 """
 import json
 import sys
@@ -19,19 +21,23 @@ def params(r):
 def main(path):
     with open(path) as f:
         results = json.load(f)
-    print("| benchmark | params | score | error (99.9 %) | unit | iterations |")
-    print("|---|---|---|---|---|---|")
+    print("| benchmark | params | mean | error (99.9 %) | best | unit | iterations |")
+    print("|---|---|---|---|---|---|---|")
     by = {}
     for r in results:
         m = r["primaryMetric"]
         by[(short(r["benchmark"]), params(r))] = m["score"]
+        raw = [x for fork in m["rawData"] for x in fork]
+        best = max(raw) if m["scoreUnit"].endswith("/s") else min(raw)
         print(f"| {short(r['benchmark'])} | {params(r)} | {m['score']:.4g} | {m['scoreError']:.2g} "
-              f"| {m['scoreUnit']} | {len(m['rawData'][0])} |")
-    pairs = [("TrialEvaluationBenchmark.structuralTrial", "TrialEvaluationBenchmark.allCodesTrial"),
-             ("TrialEvaluationBenchmark.structuralEvaluate", "TrialEvaluationBenchmark.allCodesEvaluate")]
+              f"| {best:.4g} | {m['scoreUnit']} | {len(raw)} |")
+    t = "TrialEvaluationBenchmark."
+    pairs = [(t + "structuralTrial", t + "allCodesTrial"), (t + "structuralEvaluate", t + "allCodesEvaluate"),
+             (t + "structuralTrial", t + "leanAllCodesTrial"), (t + "structuralEvaluate", t + "leanAllCodesEvaluate")]
+    print()
     for a, b in pairs:
         if (a, "") in by and (b, "") in by:
-            print(f"\nspeed-up {a.split('.')[-1]} / {b.split('.')[-1]}: {by[(a, '')] / by[(b, '')]:.0f}x")
+            print(f"speed-up {a.split('.')[-1]} / {b.split('.')[-1]}: {by[(a, '')] / by[(b, '')]:.0f}x")
     one = by.get(("MonteCarloRunBenchmark.structuralRun", "threads=1"))
     two = by.get(("MonteCarloRunBenchmark.structuralRun", "threads=2"))
     if one and two:
