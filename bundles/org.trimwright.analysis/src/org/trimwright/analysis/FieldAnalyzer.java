@@ -47,6 +47,28 @@ public final class FieldAnalyzer {
     }
 
     /**
+     * A cheaper report of a model field for screening a whole spec: the coding figures, the Monte Carlo statistics
+     * and the trim sizing, but no segmentation advice (its Monte Carlo runs every split) and no exact rare-event
+     * figures ({@code exactMonotonic} and {@code exactDnl} empty). The union bound in the mismatch report is an upper
+     * bound of the exact P(non-monotonic), so a field it clears needs no more; for the others ask
+     * {@link #analyze(Field, AnalysisSettings)}.
+     */
+    public static FieldReport analyzeQuick(Field field, AnalysisSettings settings) {
+        FieldInputs in = FieldInputs.of(field);
+        MismatchInputs mm = MismatchInputs.of(field);
+        CodingReport coding = CodingAnalysis.analyze(field.getName(), in.coding(), in.atZero(), in.step(), in.unit(),
+                settings.gateLibrary());
+        if (mm == null) {
+            return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
+        }
+        MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
+                (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
+        MismatchReport report = MismatchAnalysis.run(in.coding(), mm.model(), mm.limits(), options, null,
+                sizing(field));
+        return new FieldReport(in, settings, coding, Optional.of(report), Optional.empty(), Optional.empty());
+    }
+
+    /**
      * Analyses inline inputs.
      *
      * @param mm     mismatch inputs, or null for coding figures only

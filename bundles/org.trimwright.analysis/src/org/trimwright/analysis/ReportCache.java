@@ -19,6 +19,7 @@ public final class ReportCache {
     }
 
     private final Map<Field, Entry> entries = new WeakHashMap<>();
+    private final Map<Field, Entry> quickEntries = new WeakHashMap<>();
     private volatile AnalysisSettings settings;
 
     public ReportCache(AnalysisSettings settings) {
@@ -47,6 +48,32 @@ public final class ReportCache {
         FieldReport report = FieldAnalyzer.analyze(field, s);
         synchronized (entries) {
             entries.put(field, new Entry(key, report));
+            quickEntries.remove(field);
+        }
+        return report;
+    }
+
+    /**
+     * The full report if it is current, else a quick one ({@link FieldAnalyzer#analyzeQuick}: no segmentation advice,
+     * no exact figures), computed now if missing or stale. Validation screens a whole spec with these and asks
+     * {@link #get} only for the fields that need more.
+     */
+    public FieldReport quick(Field field) {
+        AnalysisSettings s = settings;
+        String key = fingerprint(field) + "|" + s;
+        synchronized (entries) {
+            Entry e = entries.get(field);
+            if (e != null && e.fingerprint.equals(key)) {
+                return e.report;
+            }
+            e = quickEntries.get(field);
+            if (e != null && e.fingerprint.equals(key)) {
+                return e.report;
+            }
+        }
+        FieldReport report = FieldAnalyzer.analyzeQuick(field, s);
+        synchronized (entries) {
+            quickEntries.put(field, new Entry(key, report));
         }
         return report;
     }

@@ -21,6 +21,9 @@ public final class Main {
         Map<String, Command> m = new LinkedHashMap<>();
         m.put("summary", new SummaryCommand());
         m.put("analyze", new AnalyzeCommand());
+        m.put("check", new CheckCommand());
+        m.put("diff", new DiffCommand());
+        m.put("export", new ExportCommand());
         return m;
     }
 

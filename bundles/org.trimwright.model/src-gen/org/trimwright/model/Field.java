@@ -34,7 +34,7 @@ import org.eclipse.emf.ecore.EObject;
  * </ul>
  *
  * @see org.trimwright.model.TrimwrightPackage#getField()
- * @model annotation="http://www.eclipse.org/emf/2002/Ecore constraints='bitsInsideRegister resetCodeInRange trimIsWritable'"
+ * @model annotation="http://www.eclipse.org/emf/2002/Ecore constraints='bitsInsideRegister resetCodeInRange trimIsWritable analysable rangeCoversSpread stepMeetsAccuracy residualMeetsAccuracy monotonicRisk linearityYield selectCodesLegal glitchWithinLimit searchNeedsMonotonic codesInsideSafeLimits'"
  * @generated
  */
 public interface Field extends EObject {

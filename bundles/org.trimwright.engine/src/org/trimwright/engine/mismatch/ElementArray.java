@@ -46,8 +46,15 @@ public final class ElementArray {
         this.select = coding.scheme().isSelect();
         double w = 1 << binaryBits;
         if (givenSequence != null && !select) {
+            boolean[] seen = new boolean[unaryCount];
             if (givenSequence.length != unaryCount) {
                 throw new IllegalArgumentException("sequence must have " + unaryCount + " slots");
+            }
+            for (int slot : givenSequence) {
+                if (slot < 0 || slot >= unaryCount || seen[slot]) {
+                    throw new IllegalArgumentException("sequence must be a permutation of 0.." + (unaryCount - 1));
+                }
+                seen[slot] = true;
             }
             this.sequence = givenSequence.clone();
         } else {

@@ -1408,7 +1408,7 @@ public class TrimwrightPackageImpl extends EPackageImpl implements TrimwrightPac
 		  (fieldEClass,
 		   source,
 		   new String[] {
-			   "constraints", "bitsInsideRegister resetCodeInRange trimIsWritable"
+			   "constraints", "bitsInsideRegister resetCodeInRange trimIsWritable analysable rangeCoversSpread stepMeetsAccuracy residualMeetsAccuracy monotonicRisk linearityYield selectCodesLegal glitchWithinLimit searchNeedsMonotonic codesInsideSafeLimits"
 		   });
 	}
 

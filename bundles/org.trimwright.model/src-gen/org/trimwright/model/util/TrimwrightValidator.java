@@ -270,6 +270,16 @@ public class TrimwrightValidator extends EObjectValidator {
 		if (result || diagnostics != null) result &= validateField_bitsInsideRegister(field, diagnostics, context);
 		if (result || diagnostics != null) result &= validateField_resetCodeInRange(field, diagnostics, context);
 		if (result || diagnostics != null) result &= validateField_trimIsWritable(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_analysable(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_rangeCoversSpread(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_stepMeetsAccuracy(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_residualMeetsAccuracy(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_monotonicRisk(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_linearityYield(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_selectCodesLegal(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_glitchWithinLimit(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_searchNeedsMonotonic(field, diagnostics, context);
+		if (result || diagnostics != null) result &= validateField_codesInsideSafeLimits(field, diagnostics, context);
 		return result;
 	}
 
@@ -301,6 +311,106 @@ public class TrimwrightValidator extends EObjectValidator {
 	 */
 	public boolean validateField_trimIsWritable(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
 		return org.trimwright.model.rules.StructuralRules.trimIsWritable(field, diagnostics);
+	}
+
+	/**
+	 * Validates the analysable constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_analysable(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("analysable", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the rangeCoversSpread constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_rangeCoversSpread(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("rangeCoversSpread", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the stepMeetsAccuracy constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_stepMeetsAccuracy(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("stepMeetsAccuracy", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the residualMeetsAccuracy constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_residualMeetsAccuracy(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("residualMeetsAccuracy", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the monotonicRisk constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_monotonicRisk(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("monotonicRisk", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the linearityYield constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_linearityYield(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("linearityYield", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the selectCodesLegal constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_selectCodesLegal(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("selectCodesLegal", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the glitchWithinLimit constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_glitchWithinLimit(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("glitchWithinLimit", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the searchNeedsMonotonic constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_searchNeedsMonotonic(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("searchNeedsMonotonic", field, diagnostics, context);
+	}
+
+	/**
+	 * Validates the codesInsideSafeLimits constraint of '<em>Field</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateField_codesInsideSafeLimits(Field field, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.trimwright.model.rules.FieldRules.check("codesInsideSafeLimits", field, diagnostics, context);
 	}
 
 	/**

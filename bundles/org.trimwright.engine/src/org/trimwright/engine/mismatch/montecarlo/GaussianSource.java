@@ -6,7 +6,8 @@ import java.util.SplittableRandom;
  * Standard normal deviates by the ziggurat method (Marsaglia and Tsang, J. Stat. Software 5(8), 2000) in the form with
  * an exact rejection test for the wedges (Doornik, "An improved ziggurat method to generate normal random samples",
  * 2005): 256 layers, one 64-bit draw from a {@link SplittableRandom} per accepted value in about 99 % of the calls.
- * The layer index uses the low 8 bits and the uniform the top 53 bits of the same draw, so they do not overlap.
+ * The layer index uses the low 8 bits and the signed uniform in [-1, 1) the top 53 bits of the same draw, so they do
+ * not overlap.
  * Not thread safe: one instance per thread.
  */
 public final class GaussianSource {
@@ -19,6 +20,8 @@ public final class GaussianSource {
     private static final double[] X = new double[LAYERS + 1];
     private static final double[] RATIO = new double[LAYERS];
     private static final double TO_UNIT = 0x1.0p-53;
+    /** Scales the top 53 bits read as a signed integer to a uniform in [-1, 1). */
+    private static final double TO_SIGNED_UNIT = 0x1.0p-52;
 
     static {
         double f = Math.exp(-0.5 * R * R);
@@ -50,7 +53,7 @@ public final class GaussianSource {
         while (true) {
             long bits = random.nextLong();
             int i = (int) (bits & 0xFF);
-            double u = 2.0 * ((bits >>> 11) * TO_UNIT) - 1.0;
+            double u = (bits >> 11) * TO_SIGNED_UNIT;
             if (Math.abs(u) < RATIO[i]) {
                 return u * X[i];
             }

@@ -1,7 +1,5 @@
 package org.trimwright.engine.mismatch.montecarlo;
 
-import java.util.Arrays;
-
 /**
  * Per-trial maxima of a Monte Carlo run (see {@link TrialMetrics} for the definitions), stored as floats in trial
  * order, so every statistic is independent of how the trials were spread over threads.
@@ -90,12 +88,49 @@ public final class MonteCarloResult {
         return s / trials;
     }
 
-    /** The q-quantile (0..1) of {@code metric}, by the order statistic at ceil(q * trials). */
+    /** The q-quantile (0..1) of {@code metric}: the order statistic of rank ceil(q * trials), by selection. */
     public double quantile(Metric metric, double q) {
         float[] a = values[metric.ordinal()].clone();
-        Arrays.sort(a);
         int k = (int) Math.min(trials - 1, Math.max(0, Math.ceil(q * trials) - 1));
+        return select(a, k);
+    }
+
+    /** The k-th smallest value (0-based) of {@code a} by Hoare's selection (reorders {@code a}). */
+    static float select(float[] a, int k) {
+        int lo = 0;
+        int hi = a.length - 1;
+        while (lo < hi) {
+            float pivot = median(a[lo], a[(lo + hi) >>> 1], a[hi]);
+            int i = lo;
+            int j = hi;
+            while (i <= j) {
+                while (Float.compare(a[i], pivot) < 0) {
+                    i++;
+                }
+                while (Float.compare(a[j], pivot) > 0) {
+                    j--;
+                }
+                if (i <= j) {
+                    float t = a[i];
+                    a[i] = a[j];
+                    a[j] = t;
+                    i++;
+                    j--;
+                }
+            }
+            if (k <= j) {
+                hi = j;
+            } else if (k >= i) {
+                lo = i;
+            } else {
+                return a[k];
+            }
+        }
         return a[k];
+    }
+
+    private static float median(float a, float b, float c) {
+        return Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
     }
 
     /** Histogram of {@code metric} over [0, max] in {@code bins} equal bins. */

@@ -1,5 +1,8 @@
 package org.trimwright.engine.mismatch.sequence;
 
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+
 import org.trimwright.engine.mismatch.Gradient;
 
 /**
@@ -107,6 +110,10 @@ public final class SwitchingSequences {
         return s;
     }
 
+    /** Searched sequences by slots and weights (the search is a pure function of them); bounded in size. */
+    private static final Map<String, int[]> OPTIMISED = new ConcurrentHashMap<>();
+    private static final int OPTIMISED_CACHE_LIMIT = 256;
+
     static int[] optimised(int slots, Gradient gradient) {
         if (slots <= 2) {
             return sequential(slots);
@@ -117,6 +124,19 @@ public final class SwitchingSequences {
             w1 = 1.0;
             w2 = 1.0;
         }
+        String key = slots + "|" + Double.doubleToLongBits(w1) + "|" + Double.doubleToLongBits(w2);
+        int[] known = OPTIMISED.get(key);
+        if (known == null) {
+            known = searchOptimised(slots, w1, w2);
+            if (OPTIMISED.size() >= OPTIMISED_CACHE_LIMIT) {
+                OPTIMISED.clear();
+            }
+            OPTIMISED.put(key, known);
+        }
+        return known.clone();
+    }
+
+    private static int[] searchOptimised(int slots, double w1, double w2) {
         double[] lin = new double[slots];
         double[] quad = new double[slots];
         double linMean = 0;

@@ -1,0 +1,61 @@
+package org.trimwright.export.doc;
+
+import java.util.Locale;
+
+import org.trimwright.engine.units.SiUnit;
+import org.trimwright.engine.units.SiValue;
+
+/** Number formats of the document. */
+public final class Numbers {
+
+    private Numbers() {
+    }
+
+    /** A probability or yield: 4 significant digits, scientific below 1e-3. */
+    public static String p(double v) {
+        if (Double.isNaN(v)) {
+            return "n/a";
+        }
+        if (v == 0) {
+            return "0";
+        }
+        if (Math.abs(v) < 1e-3) {
+            return String.format(Locale.ROOT, "%.3e", v);
+        }
+        return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    /** A value in LSB, 3 decimals. */
+    public static String lsb(double v) {
+        return String.format(Locale.ROOT, "%.3f LSB", v);
+    }
+
+    /** A plain number, 4 significant digits. */
+    public static String g(double v) {
+        return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    /** A physical value with engineering prefix. */
+    public static String si(double v, SiUnit unit) {
+        return SiValue.format(v, unit);
+    }
+
+    /** A physical value in a unit given by its symbol (unknown symbols are appended as text). */
+    public static String si(double v, String unit) {
+        try {
+            return SiValue.format(v, SiUnit.fromSymbol(unit == null ? "" : unit));
+        } catch (IllegalArgumentException e) {
+            return g(v) + " " + unit;
+        }
+    }
+
+    /** An address as 0x hex, 8 digits. */
+    public static String hex(long v) {
+        return String.format(Locale.ROOT, "0x%08X", v);
+    }
+
+    /** A bit range msb:lsb. */
+    public static String bits(int offset, int width) {
+        return width == 1 ? "[" + offset + "]" : "[" + (offset + width - 1) + ":" + offset + "]";
+    }
+}
