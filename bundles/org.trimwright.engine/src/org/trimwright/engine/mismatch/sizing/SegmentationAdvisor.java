@@ -26,9 +26,9 @@ public final class SegmentationAdvisor {
     /** NAND2 equivalents charged per switch with its local driver (our assumption, adjustable). */
     public static final double DEFAULT_SWITCH_NAND2_EQ = 1.0;
     /** Element draws per row at most (keeps the advice near a second); rows with many elements get fewer trials. */
-    public static final long DRAW_BUDGET = 20_000_000L;
+    public static final long DRAW_BUDGET = 4_000_000L;
     /** Fewest trials per row. */
-    public static final long MIN_TRIALS = 10_000L;
+    public static final long MIN_TRIALS = 2_000L;
 
     private SegmentationAdvisor() {
     }
