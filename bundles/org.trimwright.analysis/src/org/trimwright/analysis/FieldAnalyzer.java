@@ -4,7 +4,9 @@ import java.util.List;
 import java.util.Optional;
 import java.util.function.IntToDoubleFunction;
 
+import org.trimwright.engine.coding.CodingScheme;
 import org.trimwright.engine.coding.FieldCoding;
+import org.trimwright.engine.coding.SignedFormat;
 import org.trimwright.engine.design.CodingAnalysis;
 import org.trimwright.engine.design.CodingReport;
 import org.trimwright.engine.exact.ElementSigmas;
@@ -92,21 +94,40 @@ public final class FieldAnalyzer {
         report = report.with(advice, sized);
         Optional<ExactMonotonicity> exact = Optional.empty();
         Optional<ExactDnlYield> exactDnl = Optional.empty();
-        if (ExactYields.supports(c.scheme()) && exactApplies(c, mm)) {
-            ElementSigmas sigmas = ElementSigmas.forField(c, mm.model().unitSigma(), mm.model().switchSigma());
-            exact = Optional.of(ExactYields.monotonicity(sigmas));
-            exactDnl = Optional.of(ExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb()));
+        if (ExactYields.supports(c.scheme()) && exactApplies(mm)) {
+            FieldCoding array = arrayCoding(c);
+            ElementSigmas sigmas = ElementSigmas.forField(array, mm.model().unitSigma(), mm.model().switchSigma());
+            ExactMonotonicity m = ExactYields.monotonicity(sigmas);
+            ExactDnlYield d = ExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb());
+            if (array != c) {
+                String note = "; sign-magnitude: the " + array.bits() + "-bit magnitude array, mirrored by an ideal"
+                        + " polarity switch (both zeros are one level), has the field's steps";
+                m = new ExactMonotonicity(m.probabilityNonMonotonic(), m.numericalError(), m.method() + note);
+                d = new ExactDnlYield(d.limitLsb(), d.yield(), d.numericalError(), d.method() + note, d.definition());
+            }
+            exact = Optional.of(m);
+            exactDnl = Optional.of(d);
         }
         return new FieldReport(in, settings, coding, Optional.of(report), exact, exactDnl);
     }
 
+    /** The exact methods take independent Gaussian elements without gradients. */
+    static boolean exactApplies(MismatchInputs mm) {
+        return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0;
+    }
+
     /**
-     * The exact methods take independent Gaussian elements without gradients, in the array's own code order
-     * (sign-magnitude fields steer one magnitude array both ways and are not covered).
+     * The element array whose steps are the field's steps: the field itself, or for sign-magnitude the (n-1)-bit
+     * magnitude array that an ideal polarity switch mirrors (the same model the Monte Carlo uses).
      */
-    static boolean exactApplies(FieldCoding c, MismatchInputs mm) {
-        return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0
-                && c.signedFormat() != org.trimwright.engine.coding.SignedFormat.SIGN_MAGNITUDE;
+    static FieldCoding arrayCoding(FieldCoding c) {
+        if (c.signedFormat() != SignedFormat.SIGN_MAGNITUDE) {
+            return c;
+        }
+        int bits = c.bits() - 1;
+        int unary = c.scheme() == CodingScheme.SEGMENTED ? Math.min(c.unaryBits(), bits) : 0;
+        return new FieldCoding(bits, c.scheme(), unary, SignedFormat.UNSIGNED, false,
+                c.activeLow());
     }
 
     private static IntToDoubleFunction splitCost(CodingReport coding, FieldCoding c, GateLibrary lib) {
