@@ -10,7 +10,8 @@ shift $(( $# > 2 ? 2 : $# )) || true
 REPO="${MAVEN_REPO_LOCAL:-$HOME/.m2/repository}"
 "$HERE/trimwright" help >/dev/null    # builds the jars on first use
 CP=""
-for b in org.trimwright.engine org.trimwright.model org.trimwright.analysis org.trimwright.cli; do
+for b in org.trimwright.engine org.trimwright.model org.trimwright.analysis org.trimwright.cli org.trimwright.charts \
+    org.trimwright.export; do
     CP="$CP:$HERE/bundles/$b/target/$b-0.1.0-SNAPSHOT.jar"
 done
 while IFS=: read -r g a v; do
