@@ -369,9 +369,11 @@ public final class FieldSections {
         } else {
             List<List<String>> rows = new ArrayList<>();
             for (Problem p : ps) {
-                rows.add(List.of(p.severity(), p.source(), p.message()));
+                rows.add(List.of(p.severity(), p.path(), p.foundBy(), p.message(), p.advice() == null ? ""
+                        : p.advice()));
             }
-            s.add(new Part.Table(ps.size() + " problem(s)", List.of("severity", "found by", "message"), rows));
+            s.add(new Part.Table(ps.size() + " problem(s) of " + f.path(), List.of("severity", "element",
+                    "found by [rule]", "message", "advice"), rows));
         }
         return s.build();
     }
