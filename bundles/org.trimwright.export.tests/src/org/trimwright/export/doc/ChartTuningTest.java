@@ -4,6 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.geom.Rectangle2D;
+import java.awt.image.BufferedImage;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -59,5 +63,48 @@ class ChartTuningTest {
         assertEquals("10", a.label(10));
         assertEquals("1e3", a.label(1000));
         assertFalse(a.label(3e-6).startsWith("1e"));
+    }
+
+    @Test
+    void transferStepsAsOnePathLookTheSameAndShrinkTheSvg() {
+        FieldReport r = binaryTenBitReport();
+        JFreeChart plain = FieldCharts.transfer(r);
+        JFreeChart tuned = ChartTuning.forDocument(FieldCharts.transfer(r));
+        assertTrue(((XYPlot) tuned.getPlot()).getRenderer(0) instanceof PathStepRenderer);
+        BufferedImage a = raster(plain);
+        BufferedImage b = raster(tuned);
+        long differ = 0;
+        for (int y = 0; y < a.getHeight(); y++) {
+            for (int x = 0; x < a.getWidth(); x++) {
+                if (a.getRGB(x, y) != b.getRGB(x, y)) {
+                    differ++;
+                }
+            }
+        }
+        // the same corners drawn without antialiasing: every pixel the same (a few allowed for line joins)
+        assertTrue(differ <= a.getWidth() * a.getHeight() / 1000, differ + " pixels differ");
+        String svg = ChartSvg.svg(tuned, "t_");
+        String before = ChartSvg.svg(plain, "p_");
+        assertTrue(svg.length() * 4 < before.length(), svg.length() + " vs " + before.length());
+        assertTrue(count(svg, "<line") < 200, "1024 steps are no longer separate lines");
+    }
+
+    private static BufferedImage raster(JFreeChart c) {
+        BufferedImage img = new BufferedImage(ChartSvg.WIDTH, ChartSvg.HEIGHT, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = img.createGraphics();
+        c.setAntiAlias(false);
+        c.setTextAntiAlias(false);
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_OFF);
+        c.draw(g, new Rectangle2D.Double(0, 0, ChartSvg.WIDTH, ChartSvg.HEIGHT));
+        g.dispose();
+        return img;
+    }
+
+    private static int count(String s, String what) {
+        int n = 0;
+        for (int i = s.indexOf(what); i >= 0; i = s.indexOf(what, i + 1)) {
+            n++;
+        }
+        return n;
     }
 }
