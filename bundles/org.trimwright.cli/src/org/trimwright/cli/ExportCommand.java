@@ -30,6 +30,7 @@ final class ExportCommand implements Command {
                 + "\n\nWrites every format by default (the bundled demo when no FILE). Progress lines go to stderr;"
                 + "\nthe list of files written goes to stdout. Files: CHIP-spec.html, CHIP-spec.pdf, rtl/BLOCK.v,"
                 + "\nrtl/BLOCK_tb.v, CHIP_regs.h, csv/BLOCK_REGISTER_FIELD.csv, CHIP.ipxact.xml (see docs/export.md)."
+                + "\nThe document lists the validation problems (the findings of trimwright check) per field."
                 + "\nExit codes: 0 done, 2 bad usage, 3 unreadable spec, 5 output not writable.";
     }
 

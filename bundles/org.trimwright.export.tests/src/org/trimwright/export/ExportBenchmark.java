@@ -10,7 +10,8 @@ import org.trimwright.model.ChipSpec;
 /**
  * Scale measurement (a main, not a timed test): exports a generated spec of N fields (default 2000) in every
  * format and prints wall time and peak heap. Run with the test fragment and its host on the class path:
- * {@code java -Xmx512m -cp ... org.trimwright.export.ExportBenchmark 2000 200}.
+ * {@code java -Xmx256m -cp ... org.trimwright.export.ExportBenchmark 2000 200}; the command-level variant is
+ * {@code releng/export-benchmark.sh}. Figures: docs/export.md.
  */
 public final class ExportBenchmark {
 

@@ -14,7 +14,8 @@ import org.trimwright.analysis.AnalysisSettings;
  * @param formats        formats to write
  * @param settings       analysis settings (Monte Carlo trials, seed, gate library)
  * @param date           date printed on the title page
- * @param problemSources sources of validation problems (structural problems are always included)
+ * @param problemSources sources of validation problems (structural problems are always included: by a source that
+ *                       {@link ProblemSource#coversStructure() covers them}, else by {@link StructuralProblems})
  */
 public record ExportOptions(Set<ExportFormat> formats, AnalysisSettings settings, LocalDate date,
         List<ProblemSource> problemSources) {
@@ -24,10 +25,15 @@ public record ExportOptions(Set<ExportFormat> formats, AnalysisSettings settings
         problemSources = List.copyOf(problemSources);
     }
 
-    /** Every format, default settings, today, structural problems only. */
+    /** Every format, default settings, today, the analysis validation ({@link ValidationProblems}). */
     public static ExportOptions defaults() {
         return new ExportOptions(EnumSet.allOf(ExportFormat.class), AnalysisSettings.DEFAULTS, LocalDate.now(),
-                List.of());
+                List.of(new ValidationProblems()));
+    }
+
+    /** Replaces the problem sources (an empty list: structural problems only). */
+    public ExportOptions withProblemSources(List<ProblemSource> sources) {
+        return new ExportOptions(formats, settings, date, sources);
     }
 
     public ExportOptions withFormats(Set<ExportFormat> f) {

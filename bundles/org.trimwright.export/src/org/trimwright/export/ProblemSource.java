@@ -2,13 +2,14 @@ package org.trimwright.export;
 
 import java.util.List;
 
+import org.trimwright.analysis.ReportCache;
 import org.trimwright.model.ChipSpec;
 
 /**
- * The hook through which validation problems reach the document. The exporter always uses
- * {@link StructuralProblems} (the model's structural diagnostics); the analysis validation adds its own source
- * through {@link ExportOptions#withProblemSource(ProblemSource)} (that is where the lead plugs in the analysis
- * problems after the validation branch is merged).
+ * The hook through which validation problems reach the document. {@link ExportOptions#defaults()} uses
+ * {@link ValidationProblems} (the analysis validation, structural findings included); further sources are added
+ * with {@link ExportOptions#withProblemSource(ProblemSource)}. When no source {@link #coversStructure() covers the
+ * structure}, the exporter adds {@link StructuralProblems}, so the structural problems are always in the document.
  */
 public interface ProblemSource {
 
@@ -17,6 +18,19 @@ public interface ProblemSource {
         return getClass().getSimpleName();
     }
 
+    /** True when this source reports the structural problems of the register map itself. */
+    default boolean coversStructure() {
+        return false;
+    }
+
     /** Every problem of the spec; the document groups them by path. */
     List<Problem> problems(ChipSpec spec);
+
+    /**
+     * Every problem of the spec, reading field reports from {@code cache} (the one the export's digest filled, so
+     * nothing is computed twice). Sources that need no reports ignore the cache.
+     */
+    default List<Problem> problems(ChipSpec spec, ReportCache cache) {
+        return problems(spec);
+    }
 }

@@ -11,7 +11,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 
+import org.trimwright.analysis.ReportCache;
 import org.trimwright.export.csv.TestTables;
 import org.trimwright.export.doc.DocumentPlan;
 import org.trimwright.export.doc.HtmlDocument;
@@ -44,9 +49,19 @@ public final class SpecExport {
     public record Result(List<Path> files, SpecDigest digest) {
     }
 
-    /** Exports {@code spec} into {@code dir} (created if needed). */
+    /** Exports {@code spec} into {@code dir} (created if needed), with a new report cache. */
     public static Result export(ChipSpec spec, Path dir, ExportOptions options, ExportProgress progress)
             throws IOException {
+        return export(spec, dir, options, new ReportCache(options.settings()), progress);
+    }
+
+    /**
+     * Exports {@code spec} into {@code dir} (created if needed), reading and filling {@code cache} (its settings are
+     * used; e.g. the workbench's cache, so reports it already has are not recomputed). The HTML and the PDF document
+     * are written concurrently, each on its own thread, while the other formats are written on this one.
+     */
+    public static Result export(ChipSpec spec, Path dir, ExportOptions options, ReportCache cache,
+            ExportProgress progress) throws IOException {
         Files.createDirectories(dir);
         Set<ExportFormat> formats = options.formats();
         int n = 0;
@@ -58,32 +73,82 @@ public final class SpecExport {
         int docSteps = (formats.contains(ExportFormat.HTML) ? 1 : 0) + (formats.contains(ExportFormat.PDF) ? 1 : 0);
         int total = n * (1 + docSteps + (formats.contains(ExportFormat.CSV) ? 1 : 0)) + spec.getBlocks().size() + 2;
         Counter count = new Counter(progress, total);
-        SpecDigest digest = SpecDigest.of(spec, options, progress, total);
-        count.done = n;
+        SpecDigest digest = SpecDigest.of(spec, options, cache, count::fromDigest, total);
+        count.advance(n);
         String chip = CNames.identifier(spec.getName());
         List<Path> files = new ArrayList<>();
-        if (formats.contains(ExportFormat.HTML) || formats.contains(ExportFormat.PDF)) {
-            DocumentPlan plan = new DocumentPlan(digest, options.date());
-            int sections = countSections(plan);
-            if (formats.contains(ExportFormat.HTML)) {
-                Path p = dir.resolve(chip + "-spec.html");
-                count.say("writing " + p.getFileName());
-                try (Writer w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
-                    HtmlDocument.write(plan, w, count.per(sections, n));
+        List<Future<Path>> documents = new ArrayList<>();
+        ExecutorService docThreads = Executors.newFixedThreadPool(Math.max(1, docSteps), r -> {
+            Thread t = new Thread(r, "trimwright-export-document");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            if (docSteps > 0) {
+                DocumentPlan plan = new DocumentPlan(digest, options.date());
+                int sections = countSections(plan);
+                if (formats.contains(ExportFormat.HTML)) {
+                    Path p = dir.resolve(chip + "-spec.html");
+                    Runnable tick = count.per(sections, n);
+                    documents.add(docThreads.submit(() -> {
+                        count.say("writing " + p.getFileName());
+                        try (Writer w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
+                            HtmlDocument.write(plan, w, tick);
+                        }
+                        return p;
+                    }));
                 }
-                files.add(p);
-            }
-            if (formats.contains(ExportFormat.PDF)) {
-                Path p = dir.resolve(chip + "-spec.pdf");
-                count.say("writing " + p.getFileName());
-                try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 16)) {
-                    PdfDocument.write(plan, o, count.per(sections, n));
-                } catch (com.lowagie.text.DocumentException e) {
-                    throw new IOException("PDF: " + e.getMessage(), e);
+                if (formats.contains(ExportFormat.PDF)) {
+                    Path p = dir.resolve(chip + "-spec.pdf");
+                    Runnable tick = count.per(sections, n);
+                    documents.add(docThreads.submit(() -> {
+                        count.say("writing " + p.getFileName());
+                        try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 16)) {
+                            PdfDocument.write(plan, o, tick);
+                        } catch (com.lowagie.text.DocumentException e) {
+                            throw new IOException("PDF: " + e.getMessage(), e);
+                        }
+                        return p;
+                    }));
                 }
-                files.add(p);
             }
+            others(spec, dir, digest, formats, chip, files, count);
+            List<Path> docs = new ArrayList<>();
+            for (Future<Path> f : documents) {
+                docs.add(await(f));
+            }
+            files.addAll(0, docs);
+        } finally {
+            docThreads.shutdownNow();
         }
+        progress.report(total, total, "done: " + files.size() + " files in " + dir);
+        return new Result(files, digest);
+    }
+
+    private static Path await(Future<Path> f) throws IOException {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("export interrupted", e);
+        } catch (ExecutionException e) {
+            Throwable c = e.getCause();
+            if (c instanceof IOException io) {
+                throw io;
+            }
+            if (c instanceof RuntimeException re) {
+                throw re;
+            }
+            if (c instanceof Error err) {
+                throw err;
+            }
+            throw new IOException(c);
+        }
+    }
+
+    /** RTL, header, CSV and IP-XACT, in this order. */
+    private static void others(ChipSpec spec, Path dir, SpecDigest digest, Set<ExportFormat> formats, String chip,
+            List<Path> files, Counter count) throws IOException {
         if (formats.contains(ExportFormat.RTL)) {
             Path rtl = Files.createDirectories(dir.resolve("rtl"));
             UniqueNames names = new UniqueNames();
@@ -119,8 +184,6 @@ public final class SpecExport {
             files.add(write(dir.resolve(chip + ".ipxact.xml"), IpXactComponent.of(digest)));
             count.step("wrote " + chip + ".ipxact.xml");
         }
-        progress.report(total, total, "done: " + files.size() + " files in " + dir);
-        return new Result(files, digest);
     }
 
     private static int countSections(DocumentPlan plan) {
@@ -140,7 +203,7 @@ public final class SpecExport {
         }
     }
 
-    /** Counts work units and reports about every 5 %. */
+    /** Counts work units and reports about every 5 %; thread-safe (the documents are written concurrently). */
     private static final class Counter {
         private final ExportProgress progress;
         private final int total;
@@ -152,16 +215,24 @@ public final class SpecExport {
             this.total = total;
         }
 
-        void say(String message) {
+        synchronized void say(String message) {
             progress.report(done, total, message);
         }
 
-        void step(String message) {
+        synchronized void fromDigest(int d, int t, String message) {
+            progress.report(d, t, message);
+        }
+
+        synchronized void advance(int units) {
+            done += units;
+        }
+
+        synchronized void step(String message) {
             done++;
             say(message);
         }
 
-        void quiet() {
+        synchronized void quiet() {
             done++;
             int pct = (int) (100L * done / total);
             if (pct / 5 != lastReported / 5) {
@@ -172,12 +243,13 @@ public final class SpecExport {
 
         /** A per-section callback spreading {@code units} work units over about {@code sections} calls. */
         Runnable per(int sections, int units) {
-            int start = done;
             int[] calls = {0};
+            int[] given = {0};
             return () -> {
                 calls[0]++;
-                int target = start + (int) Math.min(units, (long) units * calls[0] / sections);
-                while (done < target) {
+                int target = (int) Math.min(units, (long) units * calls[0] / sections);
+                while (given[0] < target) {
+                    given[0]++;
                     quiet();
                 }
             };

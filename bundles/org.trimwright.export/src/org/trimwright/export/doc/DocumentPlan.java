@@ -167,19 +167,20 @@ public final class DocumentPlan {
         List<List<String>> rows = new ArrayList<>();
         digest.problems().forEach((path, list) -> {
             for (Problem p : list) {
-                rows.add(List.of(p.severity(), path, p.source(), p.message()));
+                rows.add(List.of(p.severity(), path, p.foundBy(), p.message(), p.advice() == null ? "" : p.advice()));
             }
         });
         for (ExportedField f : digest.fields()) {
-            if (f.report() == null) {
-                rows.add(List.of("error", f.path(), "analysis", "could not be analysed: " + f.error()));
+            if (f.report() == null && digest.problemsOf(f.path()).stream()
+                    .noneMatch(p -> "analysis.field-not-analysable".equals(p.ruleId()))) {
+                rows.add(List.of("error", f.path(), "analysis", "could not be analysed: " + f.error(), ""));
             }
         }
         if (rows.isEmpty()) {
             s.para("No problems found.");
         } else {
-            s.add(new Part.Table(rows.size() + " problem(s)", List.of("severity", "element", "found by", "message"),
-                    rows));
+            s.add(new Part.Table(rows.size() + " problem(s)", List.of("severity", "element", "found by [rule]",
+                    "message", "advice"), rows));
         }
         return s.build();
     }

@@ -211,6 +211,13 @@ public final class PdfDocument {
         img.scaleToFit(CHART_W, CHART_H);
         img.setAlignment(Image.MIDDLE);
         doc.add(img);
+        try {
+            // write the chart's form XObject now and drop its content: otherwise every chart of the document stays
+            // in memory until close (memory would grow with the number of fields)
+            writer.releaseTemplate(tp);
+        } catch (java.io.IOException e) {
+            throw new DocumentException(e);
+        }
         doc.add(new Paragraph(title, caption));
     }
 }
