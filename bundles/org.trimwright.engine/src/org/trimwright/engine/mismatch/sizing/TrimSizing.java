@@ -39,14 +39,18 @@ public final class TrimSizing {
         if (r.monotonicGuaranteed()) {
             note = "monotonic by construction: binary search, one measurement per bit";
         } else if (binary) {
-            note = "binary search acceptable: P(negative step) " + risk + " <= " + ACCEPTABLE_SEARCH_RISK
+            note = "binary search acceptable: P(negative step) " + sci(risk) + " <= " + sci(ACCEPTABLE_SEARCH_RISK)
                     + " (not guaranteed monotonic)";
         } else {
-            note = "not guaranteed monotonic, P(negative step) up to " + risk
+            note = "not guaranteed monotonic, P(negative step) up to " + sci(risk)
                     + ": linear search over the codes; a binary search may settle on a wrong code with about that"
                     + " probability";
         }
         return new SizingResult(r.unit(), range, maxStep, needed, bits, step, worst, rms, worst <= r.accuracy(),
                 binary ? "binary" : "linear", binary ? bits : levels - 1, levels - 1, risk, note);
+    }
+
+    private static String sci(double p) {
+        return String.format(java.util.Locale.ROOT, "%.3g", p);
     }
 }
