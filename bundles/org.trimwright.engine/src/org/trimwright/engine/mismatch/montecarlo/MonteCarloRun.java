@@ -1,6 +1,8 @@
 package org.trimwright.engine.mismatch.montecarlo;
 
 import java.util.SplittableRandom;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 
@@ -16,7 +18,12 @@ public final class MonteCarloRun {
     private MonteCarloRun() {
     }
 
-    /** Runs {@code options.trials()} trials of {@code array}. */
+    /**
+     * Runs {@code options.trials()} trials of {@code array}.
+     *
+     * @throws java.util.concurrent.CancellationException when the calling thread is interrupted (checked between
+     *         blocks of {@link MonteCarloOptions#BLOCK} trials); the interrupt flag stays set
+     */
     public static MonteCarloResult run(ElementArray array, MonteCarloOptions options) {
         int trials = (int) options.trials();
         boolean[] nonMono = new boolean[trials];
@@ -24,6 +31,8 @@ public final class MonteCarloRun {
         int blocks = (trials + MonteCarloOptions.BLOCK - 1) / MonteCarloOptions.BLOCK;
         AtomicInteger next = new AtomicInteger();
         AtomicReference<Throwable> failure = new AtomicReference<>();
+        AtomicBoolean stop = new AtomicBoolean();
+        Thread caller = Thread.currentThread();
         Runnable worker = () -> {
             try {
                 TrialSampler sampler = new TrialSampler(array);
@@ -32,7 +41,8 @@ public final class MonteCarloRun {
                 double[] b = new double[array.binaryBits()];
                 TrialMetrics m = new TrialMetrics();
                 int block;
-                while ((block = next.getAndIncrement()) < blocks && failure.get() == null) {
+                while (failure.get() == null && !stop.get() && !caller.isInterrupted()
+                        && (block = next.getAndIncrement()) < blocks) {
                     GaussianSource g = blockSource(options.seed(), block);
                     int from = block * MonteCarloOptions.BLOCK;
                     int to = Math.min(trials, from + MonteCarloOptions.BLOCK);
@@ -62,14 +72,23 @@ public final class MonteCarloRun {
                 pool[i].setDaemon(true);
                 pool[i].start();
             }
+            boolean interrupted = false;
             for (Thread t : pool) {
-                try {
-                    t.join();
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                    throw new IllegalStateException("Monte Carlo interrupted", e);
+                while (t.isAlive()) {
+                    try {
+                        t.join();
+                    } catch (InterruptedException e) {
+                        interrupted = true;
+                        stop.set(true);
+                    }
                 }
             }
+            if (interrupted) {
+                Thread.currentThread().interrupt();
+            }
+        }
+        if (stop.get() || caller.isInterrupted()) {
+            throw new CancellationException("Monte Carlo cancelled (the calling thread was interrupted)");
         }
         if (failure.get() != null) {
             throw new IllegalStateException("Monte Carlo worker failed", failure.get());

@@ -1,5 +1,6 @@
 package org.trimwright.ui.internal.views;
 
+import java.util.concurrent.CancellationException;
 import java.util.function.BiConsumer;
 
 import org.eclipse.core.runtime.IProgressMonitor;
@@ -14,8 +15,8 @@ import org.trimwright.analysis.FieldReport;
  * Computes a field's report in the background, in stages so that the views fill in early and a cancel takes
  * effect between stages: (1) coding figures only (step table, decoder cost, glitches); (2) a preview Monte Carlo
  * with at most {@link #PREVIEW_TRIALS} trials; (3) the full run with the configured trials. Each finished stage
- * is handed to the sink (on the job's thread) with its stage number; the engine's work inside one stage is not
- * interruptible, so a cancel waits for the running stage.
+ * is handed to the sink (on the job's thread) with its stage number. A cancel also interrupts the job's thread,
+ * which stops a running Monte Carlo within one block of trials.
  */
 final class AnalysisJob extends Job {
 
@@ -67,11 +68,22 @@ final class AnalysisJob extends Job {
             sink.accept(FieldAnalyzer.analyze(name(), key.inputs(), key.mismatch(), key.sizing(), s), 3);
             monitor.worked(1);
             return Status.OK_STATUS;
+        } catch (CancellationException e) {
+            Thread.interrupted();
+            return Status.CANCEL_STATUS;
         } catch (RuntimeException e) {
             failure = e;
             return Status.error("analysis of " + key.inputs().path() + " failed: " + e.getMessage(), e);
         } finally {
             monitor.done();
+        }
+    }
+
+    @Override
+    protected void canceling() {
+        Thread t = getThread();
+        if (t != null) {
+            t.interrupt();
         }
     }
 
