@@ -28,7 +28,7 @@ public final class SegmentationAdvisor {
     /** Element draws per row at most (keeps the advice near a second); rows with many elements get fewer trials. */
     public static final long DRAW_BUDGET = 4_000_000L;
     /** Fewest trials per row. */
-    public static final long MIN_TRIALS = 2_000L;
+    public static final long MIN_TRIALS = 500L;
 
     private SegmentationAdvisor() {
     }
