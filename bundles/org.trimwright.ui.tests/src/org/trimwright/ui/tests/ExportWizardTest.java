@@ -122,7 +122,7 @@ class ExportWizardTest {
         assertNull(page.getErrorMessage());
         assertTrue(page.isPageComplete());
         assertTrue(finish().isEnabled());
-        Ui.screenshot(dialog.getShell(), "10-export-wizard");
+        Ui.screenshot(dialog.getShell(), "20-export-wizard");
 
         Path dir = Files.createTempDirectory("trimwright-export-wizard");
         Path file = Files.writeString(dir.resolve("not-a-folder.txt"), "x");
@@ -130,7 +130,7 @@ class ExportWizardTest {
         assertEquals(file + " is a file, not a folder.", page.getErrorMessage());
         assertFalse(page.isPageComplete());
         assertFalse(finish().isEnabled(), "Finish disabled while the folder is unusable");
-        Ui.screenshot(dialog.getShell(), "11-export-wizard-bad-folder");
+        Ui.screenshot(dialog.getShell(), "21-export-wizard-bad-folder");
 
         type(page.folderText(), file.resolve("sub").toString());
         assertTrue(page.getErrorMessage().contains("is a file, not a folder"), page.getErrorMessage());
@@ -212,5 +212,31 @@ class ExportWizardTest {
         assertEquals(onDisk, Files.readString(doc.file()), "the spec file is untouched");
         System.out.printf("export wizard: %d files (CSV + header) of the demo in %.2f s (job %.2f s)%n",
                 written.size(), seconds, o.seconds());
+    }
+
+    @Test
+    void cancelStopsALongExportAndReportsItCancelled() throws Exception {
+        ExportPage page = wizard.page();
+        Path out = Files.createTempDirectory("trimwright-export-wizard").resolve("cancelled");
+        type(page.folderText(), out.toString());
+        // Many trials: the analysis of the demo's fields takes far longer than the moment until Cancel is pressed.
+        type(page.trialsText(), "1000000");
+        assertNull(page.getErrorMessage());
+        finish().notifyListeners(SWT.Selection, new Event());
+        ExportJob job = wizard.job();
+        Ui.pumpUntil("export job running", () -> job.getState() == org.eclipse.core.runtime.jobs.Job.RUNNING, 10_000);
+        Ui.settle(300);
+        Ui.screenshot(wizard.progressWindow().shell(), "22-export-progress");
+        Button cancel = wizard.progressWindow().cancelButton();
+        long t0 = System.nanoTime();
+        cancel.notifyListeners(SWT.Selection, new Event());
+        Ui.pumpUntil("cancelled outcome", () -> outcome.get() != null, WAIT);
+        double latency = (System.nanoTime() - t0) / 1e9;
+        assertEquals(ExportOutcome.State.CANCELLED, outcome.get().state());
+        assertTrue(outcome.get().files().isEmpty());
+        assertTrue(wizard.progressWindow().shell().isDisposed());
+        assertFalse(Files.exists(out.resolve("TMK3-spec.html")), "documents are written only after the analysis");
+        assertTrue(latency < 10, "cancel took effect in " + latency + " s");
+        System.out.printf("export wizard: cancel took effect after %.2f s%n", latency);
     }
 }

@@ -28,9 +28,10 @@ public final class ExportProgressWindow {
     private final Button cancel;
     private final AtomicBoolean pending = new AtomicBoolean();
     private volatile int ticks;
-    private volatile String step = "starting";
+    private volatile String step;
 
     private ExportProgressWindow(Shell parent, ExportJob job) {
+        step = "analysing the fields (Monte Carlo, " + job.options().settings().trials() + " trials each)...";
         shell = new Shell(parent, SWT.DIALOG_TRIM | SWT.MODELESS);
         shell.setText("Exporting " + job.folder().getFileName());
         shell.setLayout(new GridLayout(2, false));
