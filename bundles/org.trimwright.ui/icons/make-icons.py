@@ -167,6 +167,21 @@ def chart():
     return c
 
 
+def export():
+    """A spec page with a copper arrow leaving it to the right (the spec going out to other teams)."""
+    c = Canvas(16)
+    c.rect(1, 1, 9, 14, WHITE)
+    c.frame(1, 1, 9, 14, INK)
+    for i in range(3):
+        c.rect(3 + 2 * i, 10 - 2 * i, 4 + 2 * i, 12, TEAL)
+    c.rect(7, 7, 12, 8, COPPER)
+    c.line(11, 4, 14, 7, COPPER)
+    c.line(11, 11, 14, 8, COPPER)
+    c.line(10, 4, 13, 7, COPPER)
+    c.line(10, 11, 13, 8, COPPER)
+    return c
+
+
 if __name__ == "__main__":
     for n in (16, 32, 64, 128):
         app_icon(n).save("trimwright%d.png" % n)
@@ -183,3 +198,4 @@ if __name__ == "__main__":
     marker(RED, True).save("error.png")
     marker(AMBER, True).save("warning.png")
     chart().save("chart.png")
+    export().save("export.png")
