@@ -16,6 +16,8 @@ import org.trimwright.engine.exact.ExactYields;
 import org.trimwright.engine.logic.DecoderCost;
 import org.trimwright.engine.logic.DecoderSynthesis;
 import org.trimwright.engine.logic.GateLibrary;
+import org.trimwright.engine.memo.BoundedMemo;
+import org.trimwright.engine.memo.MemoisedExactYields;
 import org.trimwright.engine.mismatch.MismatchAnalysis;
 import org.trimwright.engine.mismatch.MismatchReport;
 import org.trimwright.engine.mismatch.montecarlo.MonteCarloOptions;
@@ -38,6 +40,12 @@ public final class FieldAnalyzer {
      */
     public static final long ADVICE_TRIALS = 20_000;
 
+    /** The decoder cost of every segmentation split depends on the coding and the gate library only. */
+    private record SplitKey(FieldCoding coding, GateLibrary lib) {
+    }
+
+    private static final BoundedMemo<SplitKey, List<DecoderCost>> SPLIT_COSTS = new BoundedMemo<>(1024);
+
     private FieldAnalyzer() {
     }
 
@@ -58,8 +66,8 @@ public final class FieldAnalyzer {
     public static FieldReport analyzeQuick(Field field, AnalysisSettings settings) {
         FieldInputs in = FieldInputs.of(field);
         MismatchInputs mm = MismatchInputs.of(field);
-        CodingReport coding = CodingAnalysis.analyze(field.getName(), in.coding(), in.atZero(), in.step(), in.unit(),
-                settings.gateLibrary());
+        CodingReport coding = CodingAnalysis.analyzeShared(field.getName(), in.coding(), in.atZero(), in.step(),
+                in.unit(), settings.gateLibrary());
         if (mm == null) {
             return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
         }
@@ -78,7 +86,7 @@ public final class FieldAnalyzer {
      */
     public static FieldReport analyze(String name, FieldInputs in, MismatchInputs mm, SizingRequest sizing,
             AnalysisSettings settings) {
-        CodingReport coding = CodingAnalysis.analyze(name, in.coding(), in.atZero(), in.step(), in.unit(),
+        CodingReport coding = CodingAnalysis.analyzeShared(name, in.coding(), in.atZero(), in.step(), in.unit(),
                 settings.gateLibrary());
         if (mm == null) {
             return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
@@ -97,8 +105,8 @@ public final class FieldAnalyzer {
         if (ExactYields.supports(c.scheme()) && exactApplies(mm)) {
             FieldCoding array = arrayCoding(c);
             ElementSigmas sigmas = ElementSigmas.forField(array, mm.model().unitSigma(), mm.model().switchSigma());
-            ExactMonotonicity m = ExactYields.monotonicity(sigmas);
-            ExactDnlYield d = ExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb());
+            ExactMonotonicity m = MemoisedExactYields.monotonicity(sigmas);
+            ExactDnlYield d = MemoisedExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb());
             if (array != c) {
                 String note = "; sign-magnitude: the " + array.bits() + "-bit magnitude array, mirrored by an ideal"
                         + " polarity switch (both zeros are one level), has the field's steps";
@@ -132,7 +140,8 @@ public final class FieldAnalyzer {
 
     private static IntToDoubleFunction splitCost(CodingReport coding, FieldCoding c, GateLibrary lib) {
         List<DecoderCost> splits = coding.splitCosts().isEmpty()
-                ? DecoderSynthesis.costPerSplit(c, lib) : coding.splitCosts();
+                ? SPLIT_COSTS.get(new SplitKey(c, lib), k -> DecoderSynthesis.costPerSplit(k.coding(), k.lib()))
+                : coding.splitCosts();
         return m -> splits.get(m).nand2Equivalent();
     }
 
