@@ -18,6 +18,8 @@ import org.trimwright.engine.logic.DecoderSynthesis;
 import org.trimwright.engine.logic.GateLibrary;
 import org.trimwright.engine.memo.BoundedMemo;
 import org.trimwright.engine.memo.MemoisedExactYields;
+import org.trimwright.engine.mismatch.ElementModel;
+import org.trimwright.engine.mismatch.Limits;
 import org.trimwright.engine.mismatch.MismatchAnalysis;
 import org.trimwright.engine.mismatch.MismatchReport;
 import org.trimwright.engine.mismatch.montecarlo.MonteCarloOptions;
@@ -45,6 +47,19 @@ public final class FieldAnalyzer {
     }
 
     private static final BoundedMemo<SplitKey, List<DecoderCost>> SPLIT_COSTS = new BoundedMemo<>(1024);
+
+    /**
+     * Everything the Monte Carlo statistics and the segmentation advice of a field depend on (the trials are seeded
+     * by the settings, so equal keys give equal results; the field's name, step and unit do not enter them).
+     */
+    private record StatisticsKey(FieldCoding coding, GateLibrary lib, ElementModel model, Limits limits,
+            MonteCarloOptions options) {
+    }
+
+    /** Monte Carlo reports (before advice and sizing) of distinct statistics keys; bounded. */
+    private static final BoundedMemo<StatisticsKey, MismatchReport> MONTE_CARLO = new BoundedMemo<>(256);
+    /** Segmentation advice of distinct statistics keys; bounded. */
+    private static final BoundedMemo<StatisticsKey, SegmentationAdvice> ADVICE = new BoundedMemo<>(256);
 
     private FieldAnalyzer() {
     }
@@ -94,10 +109,11 @@ public final class FieldAnalyzer {
         FieldCoding c = in.coding();
         MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
                 (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
-        MismatchReport report = MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
-        SegmentationAdvice advice = SegmentationAdvisor.advise(c.bits(), c.signedFormat(), mm.model(), mm.limits(),
-                options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
-                splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ);
+        StatisticsKey key = new StatisticsKey(c, settings.gateLibrary(), mm.model(), mm.limits(), options);
+        MismatchReport report = MONTE_CARLO.get(key, k -> MismatchAnalysis.run(c, mm.model(), mm.limits(), options));
+        SegmentationAdvice advice = ADVICE.get(key, k -> SegmentationAdvisor.advise(c.bits(), c.signedFormat(),
+                mm.model(), mm.limits(), options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
+                splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ));
         SizingResult sized = sizing == null ? null : TrimSizing.size(sizing.withField(report));
         report = report.with(advice, sized);
         Optional<ExactMonotonicity> exact = Optional.empty();
