@@ -127,7 +127,9 @@ public final class PdfDocument {
         Paragraph head = new Paragraph(new Chunk(s.title(), f).setLocalDestination(s.id()));
         head.setSpacingBefore(s.level() == 3 ? 10 : 0);
         head.setSpacingAfter(4);
-        head.setKeepTogether(true);
+        // a one-line heading cannot split anyway; OpenPDF keeps a paragraph together by wrapping it in a table,
+        // which costs as much as the table cells, so only headings that wrap ask for it
+        head.setKeepTogether(fonts.base().getWidthPoint(s.title(), f.getSize()) > doc.right() - doc.left());
         doc.add(head);
         for (Part p : s.parts()) {
             part(p);
