@@ -56,6 +56,12 @@ public final class FieldAnalyzer {
             MonteCarloOptions options) {
     }
 
+    /**
+     * Widest field whose Monte Carlo report is memoised: a report holds about ten per-level arrays, so 256 reports of
+     * at most 2^10 levels stay within about 20 MB.
+     */
+    static final int SHARED_BITS = 10;
+
     /** Monte Carlo reports (before advice and sizing) of distinct statistics keys; bounded. */
     private static final BoundedMemo<StatisticsKey, MismatchReport> MONTE_CARLO = new BoundedMemo<>(256);
     /** Segmentation advice of distinct statistics keys; bounded. */
@@ -110,7 +116,9 @@ public final class FieldAnalyzer {
         MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
                 (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
         StatisticsKey key = new StatisticsKey(c, settings.gateLibrary(), mm.model(), mm.limits(), options);
-        MismatchReport report = MONTE_CARLO.get(key, k -> MismatchAnalysis.run(c, mm.model(), mm.limits(), options));
+        MismatchReport report = c.bits() <= SHARED_BITS
+                ? MONTE_CARLO.get(key, k -> MismatchAnalysis.run(c, mm.model(), mm.limits(), options))
+                : MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
         SegmentationAdvice advice = ADVICE.get(key, k -> SegmentationAdvisor.advise(c.bits(), c.signedFormat(),
                 mm.model(), mm.limits(), options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
                 splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ));

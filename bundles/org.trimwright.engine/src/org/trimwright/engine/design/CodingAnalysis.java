@@ -54,15 +54,18 @@ public final class CodingAnalysis {
     /**
      * As {@link #analyze(String, FieldCoding, double, double, SiUnit, GateLibrary)}, taking the decoder netlist and
      * costs from a bounded memo keyed by the coding and the gate library (the only inputs they depend on), so fields
-     * with equal codings share one synthesis. The report is identical to a fresh one.
+     * with equal codings (up to {@value #SHARED_DECODER_BITS} bits) share one synthesis. The report is identical to a
+     * fresh one.
      */
     public static CodingReport analyzeShared(String name, FieldCoding coding, double atZero, double step,
             SiUnit unit, GateLibrary lib) {
         if (coding == null || unit == null || lib == null) {
             throw new IllegalArgumentException("coding, unit and gate library are required");
         }
-        return analyze(name, coding, atZero, step, unit, lib,
-                DECODERS.get(new DecoderKey(coding, lib), k -> decoder(k.coding(), k.lib())));
+        Decoder d = coding.bits() <= SHARED_DECODER_BITS
+                ? DECODERS.get(new DecoderKey(coding, lib), k -> decoder(k.coding(), k.lib()))
+                : decoder(coding, lib);
+        return analyze(name, coding, atZero, step, unit, lib, d);
     }
 
     private record DecoderKey(FieldCoding coding, GateLibrary lib) {
@@ -73,8 +76,11 @@ public final class CodingAnalysis {
             List<DecoderCost> splits) {
     }
 
-    /** Distinct (coding, library) pairs held by {@link #analyzeShared}. */
-    private static final BoundedMemo<DecoderKey, Decoder> DECODERS = new BoundedMemo<>(1024);
+    /** Widest coding whose decoder {@link #analyzeShared} keeps (a wider netlist is large and rarely shared). */
+    static final int SHARED_DECODER_BITS = 10;
+
+    /** Distinct (coding, library) pairs held by {@link #analyzeShared}; bounded. */
+    private static final BoundedMemo<DecoderKey, Decoder> DECODERS = new BoundedMemo<>(256);
 
     private static Decoder decoder(FieldCoding coding, GateLibrary lib) {
         CodeMap map = new CodeMap(coding);
