@@ -16,6 +16,10 @@ import org.trimwright.engine.exact.ExactYields;
 import org.trimwright.engine.logic.DecoderCost;
 import org.trimwright.engine.logic.DecoderSynthesis;
 import org.trimwright.engine.logic.GateLibrary;
+import org.trimwright.engine.memo.BoundedMemo;
+import org.trimwright.engine.memo.MemoisedExactYields;
+import org.trimwright.engine.mismatch.ElementModel;
+import org.trimwright.engine.mismatch.Limits;
 import org.trimwright.engine.mismatch.MismatchAnalysis;
 import org.trimwright.engine.mismatch.MismatchReport;
 import org.trimwright.engine.mismatch.montecarlo.MonteCarloOptions;
@@ -38,6 +42,31 @@ public final class FieldAnalyzer {
      */
     public static final long ADVICE_TRIALS = 20_000;
 
+    /** The decoder cost of every segmentation split depends on the coding and the gate library only. */
+    private record SplitKey(FieldCoding coding, GateLibrary lib) {
+    }
+
+    private static final BoundedMemo<SplitKey, List<DecoderCost>> SPLIT_COSTS = new BoundedMemo<>(1024);
+
+    /**
+     * Everything the Monte Carlo statistics and the segmentation advice of a field depend on (the trials are seeded
+     * by the settings, so equal keys give equal results; the field's name, step and unit do not enter them).
+     */
+    private record StatisticsKey(FieldCoding coding, GateLibrary lib, ElementModel model, Limits limits,
+            MonteCarloOptions options) {
+    }
+
+    /**
+     * Widest field whose Monte Carlo report is memoised: a report holds about ten per-level arrays, so 256 reports of
+     * at most 2^10 levels stay within about 20 MB.
+     */
+    static final int SHARED_BITS = 10;
+
+    /** Monte Carlo reports (before advice and sizing) of distinct statistics keys; bounded. */
+    private static final BoundedMemo<StatisticsKey, MismatchReport> MONTE_CARLO = new BoundedMemo<>(256);
+    /** Segmentation advice of distinct statistics keys; bounded. */
+    private static final BoundedMemo<StatisticsKey, SegmentationAdvice> ADVICE = new BoundedMemo<>(256);
+
     private FieldAnalyzer() {
     }
 
@@ -58,8 +87,8 @@ public final class FieldAnalyzer {
     public static FieldReport analyzeQuick(Field field, AnalysisSettings settings) {
         FieldInputs in = FieldInputs.of(field);
         MismatchInputs mm = MismatchInputs.of(field);
-        CodingReport coding = CodingAnalysis.analyze(field.getName(), in.coding(), in.atZero(), in.step(), in.unit(),
-                settings.gateLibrary());
+        CodingReport coding = CodingAnalysis.analyzeShared(field.getName(), in.coding(), in.atZero(), in.step(),
+                in.unit(), settings.gateLibrary());
         if (mm == null) {
             return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
         }
@@ -78,7 +107,7 @@ public final class FieldAnalyzer {
      */
     public static FieldReport analyze(String name, FieldInputs in, MismatchInputs mm, SizingRequest sizing,
             AnalysisSettings settings) {
-        CodingReport coding = CodingAnalysis.analyze(name, in.coding(), in.atZero(), in.step(), in.unit(),
+        CodingReport coding = CodingAnalysis.analyzeShared(name, in.coding(), in.atZero(), in.step(), in.unit(),
                 settings.gateLibrary());
         if (mm == null) {
             return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
@@ -86,10 +115,13 @@ public final class FieldAnalyzer {
         FieldCoding c = in.coding();
         MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
                 (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
-        MismatchReport report = MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
-        SegmentationAdvice advice = SegmentationAdvisor.advise(c.bits(), c.signedFormat(), mm.model(), mm.limits(),
-                options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
-                splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ);
+        StatisticsKey key = new StatisticsKey(c, settings.gateLibrary(), mm.model(), mm.limits(), options);
+        MismatchReport report = c.bits() <= SHARED_BITS
+                ? MONTE_CARLO.get(key, k -> MismatchAnalysis.run(c, mm.model(), mm.limits(), options))
+                : MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
+        SegmentationAdvice advice = ADVICE.get(key, k -> SegmentationAdvisor.advise(c.bits(), c.signedFormat(),
+                mm.model(), mm.limits(), options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
+                splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ));
         SizingResult sized = sizing == null ? null : TrimSizing.size(sizing.withField(report));
         report = report.with(advice, sized);
         Optional<ExactMonotonicity> exact = Optional.empty();
@@ -97,8 +129,8 @@ public final class FieldAnalyzer {
         if (ExactYields.supports(c.scheme()) && exactApplies(mm)) {
             FieldCoding array = arrayCoding(c);
             ElementSigmas sigmas = ElementSigmas.forField(array, mm.model().unitSigma(), mm.model().switchSigma());
-            ExactMonotonicity m = ExactYields.monotonicity(sigmas);
-            ExactDnlYield d = ExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb());
+            ExactMonotonicity m = MemoisedExactYields.monotonicity(sigmas);
+            ExactDnlYield d = MemoisedExactYields.dnlYieldNominal(sigmas, mm.limits().maxDnlLsb());
             if (array != c) {
                 String note = "; sign-magnitude: the " + array.bits() + "-bit magnitude array, mirrored by an ideal"
                         + " polarity switch (both zeros are one level), has the field's steps";
@@ -132,7 +164,8 @@ public final class FieldAnalyzer {
 
     private static IntToDoubleFunction splitCost(CodingReport coding, FieldCoding c, GateLibrary lib) {
         List<DecoderCost> splits = coding.splitCosts().isEmpty()
-                ? DecoderSynthesis.costPerSplit(c, lib) : coding.splitCosts();
+                ? SPLIT_COSTS.get(new SplitKey(c, lib), k -> DecoderSynthesis.costPerSplit(k.coding(), k.lib()))
+                : coding.splitCosts();
         return m -> splits.get(m).nand2Equivalent();
     }
 

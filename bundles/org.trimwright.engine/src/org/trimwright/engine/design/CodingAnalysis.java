@@ -13,6 +13,7 @@ import org.trimwright.engine.logic.DecoderSynthesis;
 import org.trimwright.engine.logic.GateLibrary;
 import org.trimwright.engine.logic.Netlist;
 import org.trimwright.engine.logic.OutputFunctions;
+import org.trimwright.engine.memo.BoundedMemo;
 import org.trimwright.engine.units.SiUnit;
 import org.trimwright.engine.units.SiValue;
 
@@ -47,8 +48,42 @@ public final class CodingAnalysis {
         if (coding == null || unit == null || lib == null) {
             throw new IllegalArgumentException("coding, unit and gate library are required");
         }
+        return analyze(name, coding, atZero, step, unit, lib, decoder(coding, lib));
+    }
+
+    /**
+     * As {@link #analyze(String, FieldCoding, double, double, SiUnit, GateLibrary)}, taking the decoder netlist and
+     * costs from a bounded memo keyed by the coding and the gate library (the only inputs they depend on), so fields
+     * with equal codings (up to {@value #SHARED_DECODER_BITS} bits) share one synthesis. The report is identical to a
+     * fresh one.
+     */
+    public static CodingReport analyzeShared(String name, FieldCoding coding, double atZero, double step,
+            SiUnit unit, GateLibrary lib) {
+        if (coding == null || unit == null || lib == null) {
+            throw new IllegalArgumentException("coding, unit and gate library are required");
+        }
+        Decoder d = coding.bits() <= SHARED_DECODER_BITS
+                ? DECODERS.get(new DecoderKey(coding, lib), k -> decoder(k.coding(), k.lib()))
+                : decoder(coding, lib);
+        return analyze(name, coding, atZero, step, unit, lib, d);
+    }
+
+    private record DecoderKey(FieldCoding coding, GateLibrary lib) {
+    }
+
+    /** The decoder figures of a coding: they depend on the coding and the gate library only. */
+    private record Decoder(Netlist netlist, DecoderCost cost, Optional<DecoderCost> twoLevel,
+            List<DecoderCost> splits) {
+    }
+
+    /** Widest coding whose decoder {@link #analyzeShared} keeps (a wider netlist is large and rarely shared). */
+    static final int SHARED_DECODER_BITS = 10;
+
+    /** Distinct (coding, library) pairs held by {@link #analyzeShared}; bounded. */
+    private static final BoundedMemo<DecoderKey, Decoder> DECODERS = new BoundedMemo<>(256);
+
+    private static Decoder decoder(FieldCoding coding, GateLibrary lib) {
         CodeMap map = new CodeMap(coding);
-        StepTable table = new StepTable(map, atZero, step);
         Netlist netlist = DecoderSynthesis.netlist(map, lib);
         DecoderCost cost = DecoderCost.of(netlist, map.unitElements(), DecoderSynthesis.STRUCTURAL_METHOD);
         Optional<DecoderCost> twoLevel = Optional.empty();
@@ -59,7 +94,14 @@ public final class CodingAnalysis {
         }
         List<DecoderCost> splits = coding.scheme() == CodingScheme.SEGMENTED
                 ? DecoderSynthesis.costPerSplit(coding, lib) : List.of();
-        return new CodingReport(name, coding, unit, table, netlist, cost, twoLevel, splits,
+        return new Decoder(netlist, cost, twoLevel, splits);
+    }
+
+    private static CodingReport analyze(String name, FieldCoding coding, double atZero, double step, SiUnit unit,
+            GateLibrary lib, Decoder d) {
+        CodeMap map = new CodeMap(coding);
+        StepTable table = new StepTable(map, atZero, step);
+        return new CodingReport(name, coding, unit, table, d.netlist(), d.cost(), d.twoLevel(), d.splits(),
                 GlitchAnalysis.analyse(map, step));
     }
 

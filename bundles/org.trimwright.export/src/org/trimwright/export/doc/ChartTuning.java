@@ -20,6 +20,7 @@ import org.jfree.chart.renderer.xy.XYDifferenceRenderer;
 import org.jfree.chart.renderer.xy.XYItemRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.renderer.xy.XYStepRenderer;
+import org.jfree.chart.text.TextUtils;
 
 /**
  * Makes a chart of {@code org.trimwright.charts} cheaper to draw into a document, without changing what it shows:
@@ -28,10 +29,18 @@ import org.jfree.chart.renderer.xy.XYStepRenderer;
  * and PDF operators; {@link PathStepRenderer}, {@link PathBandRenderer} for the outlines of a band);</li>
  * <li>logarithmic axes label their decades as plain text {@code 1e-6} instead of a superscript exponent: the
  * superscript goes through a {@code TextLayout}, which JFreeSVG and OpenPDF draw as glyph outlines (large, slow, and
- * not searchable), plain labels stay text.</li>
+ * not searchable), plain labels stay text;</li>
+ * <li>axis titles (and every other string JFreeChart draws through {@code TextUtils.drawRotatedString}) are drawn
+ * with {@code Graphics2D.drawString} instead of JFreeChart's default work-around for an old JDK bug with rotated
+ * text (a {@code TextLayout}, which JFreeSVG and OpenPDF again draw as glyph outlines). This is a process-wide
+ * JFreeChart setting; the text is the same, now as text.</li>
  * </ul>
  */
 final class ChartTuning {
+
+    static {
+        TextUtils.setUseDrawRotatedStringWorkaround(false);
+    }
 
     private ChartTuning() {
     }

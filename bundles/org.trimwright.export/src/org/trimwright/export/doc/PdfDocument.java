@@ -49,6 +49,7 @@ public final class PdfDocument {
     private final Font h2;
     private final Font h3;
     private final Font tableHead;
+    private final PdfRowTable rowTable;
 
     private PdfDocument(OutputStream out) throws DocumentException {
         doc = new Document(PageSize.A4, 40, 40, 48, 48);
@@ -62,6 +63,7 @@ public final class PdfDocument {
         h2 = new Font(fonts.base(), 14f, Font.NORMAL, INK);
         h3 = new Font(fonts.base(), 10.5f, Font.NORMAL, COPPER);
         tableHead = new Font(fonts.base(), 8f, Font.NORMAL, INK);
+        rowTable = new PdfRowTable(doc, writer, fonts.base(), INK);
     }
 
     /** Writes the whole document; {@code onSection} is told after each section (for progress). */
@@ -125,7 +127,9 @@ public final class PdfDocument {
         Paragraph head = new Paragraph(new Chunk(s.title(), f).setLocalDestination(s.id()));
         head.setSpacingBefore(s.level() == 3 ? 10 : 0);
         head.setSpacingAfter(4);
-        head.setKeepTogether(true);
+        // a one-line heading cannot split anyway; OpenPDF keeps a paragraph together by wrapping it in a table,
+        // which costs as much as the table cells, so only headings that wrap ask for it
+        head.setKeepTogether(fonts.base().getWidthPoint(s.title(), f.getSize()) > doc.right() - doc.left());
         doc.add(head);
         for (Part p : s.parts()) {
             part(p);
@@ -150,6 +154,8 @@ public final class PdfDocument {
             box.setSpacingBefore(4);
             box.setSpacingAfter(4);
             doc.add(box);
+        } else if (p instanceof Part.KeyValues kv && rowTable.fits(KEY_VALUES, null, rows(kv))) {
+            rowTable.write(KEY_VALUES, null, rows(kv), 4);
         } else if (p instanceof Part.KeyValues kv) {
             PdfPTable t = new PdfPTable(new float[] {2, 5});
             t.setWidthPercentage(100);
@@ -166,9 +172,20 @@ public final class PdfDocument {
         }
     }
 
+    private static final PdfRowTable.Style KEY_VALUES = PdfRowTable.keyValues(MUTED);
+
+    private static List<List<String>> rows(Part.KeyValues kv) {
+        return kv.rows().stream().map(java.util.Arrays::asList).toList();
+    }
+
     private void table(Part.Table tab) throws DocumentException {
         Paragraph cap = new Paragraph(tab.caption(), caption);
         doc.add(cap);
+        PdfRowTable.Style style = PdfRowTable.data(tab.header().size());
+        if (rowTable.fits(style, tab.header(), tab.rows())) {
+            rowTable.write(style, tab.header(), tab.rows(), 6);
+            return;
+        }
         PdfPTable t = new PdfPTable(tab.header().size());
         t.setWidthPercentage(100);
         t.setHeaderRows(1);

@@ -1,6 +1,7 @@
 package org.trimwright.export.rtl;
 
 import java.util.ArrayList;
+import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -31,7 +32,8 @@ public final class BlockVerilog {
     private final Block block;
     private final List<ExportedField> fields;
     private final String top;
-    private final Map<ExportedField, String> modules = new LinkedHashMap<>();
+    /** By identity: a record's hash would walk the field's whole report on every look-up. */
+    private final Map<ExportedField, String> modules = new IdentityHashMap<>();
     private final Map<Register, String> ports = new LinkedHashMap<>();
 
     /** Plans the names of one block's modules and ports. */
