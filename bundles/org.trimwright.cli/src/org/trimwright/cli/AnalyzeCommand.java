@@ -55,12 +55,9 @@ final class AnalyzeCommand implements Command {
     @Override
     public int run(List<String> args, PrintStream out, PrintStream err) {
         Args a = Args.parse(args, VALUE_OPTIONS, FLAGS);
-        AnalysisSettings settings = new AnalysisSettings(
-                a.longValue("trials", AnalysisSettings.DEFAULT_TRIALS), a.longValue("seed", AnalysisSettings.DEFAULT_SEED),
-                a.integer("threads", 0, 1024, 0), a.integer("gates", 2, 3, 2));
-        if (settings.trials() > 50_000_000L) {
-            throw new UsageException("--trials " + settings.trials() + " is above the limit of 50000000");
-        }
+        AnalysisSettings settings = new AnalysisSettings(a.trials(1, AnalysisSettings.DEFAULT_TRIALS),
+                a.longValue("seed", AnalysisSettings.DEFAULT_SEED), a.integer("threads", 0, 1024, 0),
+                a.integer("gates", 2, 3, 2));
         FieldReport report;
         if (!a.positional().isEmpty()) {
             if (a.positional().size() != 2) {

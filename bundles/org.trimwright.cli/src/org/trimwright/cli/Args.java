@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
+import org.trimwright.engine.mismatch.montecarlo.MonteCarloOptions;
+
 /** Parsed arguments: positional words, options with a value ({@code --bits 6}) and flags ({@code --json}). */
 final class Args {
 
@@ -78,31 +80,34 @@ final class Args {
     }
 
     int integer(String name, int min, int max, int fallback) {
-        String v = values.get(name);
-        if (v == null) {
-            return fallback;
-        }
-        try {
-            int n = Integer.parseInt(v.strip());
-            if (n < min || n > max) {
-                throw new UsageException("--" + name + " " + v + " is outside " + min + ".." + max);
-            }
-            return n;
-        } catch (NumberFormatException e) {
-            throw new UsageException("--" + name + " expects a whole number, got '" + v + "'");
-        }
+        return (int) longValue(name, min, max, fallback);
     }
 
     long longValue(String name, long fallback) {
+        return longValue(name, Long.MIN_VALUE, Long.MAX_VALUE, fallback);
+    }
+
+    /** A whole-number option within min..max; {@code fallback} when absent. */
+    long longValue(String name, long min, long max, long fallback) {
         String v = values.get(name);
         if (v == null) {
             return fallback;
         }
+        long n;
         try {
-            return Long.parseLong(v.strip());
+            n = Long.parseLong(v.strip());
         } catch (NumberFormatException e) {
             throw new UsageException("--" + name + " expects a whole number, got '" + v + "'");
         }
+        if (n < min || n > max) {
+            throw new UsageException("--" + name + " " + v + " is outside " + min + ".." + max);
+        }
+        return n;
+    }
+
+    /** The Monte Carlo trials option: min..{@link MonteCarloOptions#MAX_TRIALS}. */
+    long trials(long min, long fallback) {
+        return longValue("trials", min, MonteCarloOptions.MAX_TRIALS, fallback);
     }
 
     double number(String name, double min, double max, double fallback) {

@@ -54,10 +54,7 @@ final class CheckCommand implements Command {
         if (a.positional().size() != 1) {
             throw new UsageException("expected one spec FILE, got " + a.positional());
         }
-        long trials = a.longValue("trials", DEFAULT_TRIALS);
-        if (trials < 100 || trials > 100_000_000L) {
-            throw new UsageException("--trials " + trials + " is outside 100..100000000");
-        }
+        long trials = a.trials(100, DEFAULT_TRIALS);
         long seed = a.longValue("seed", AnalysisSettings.DEFAULT_SEED);
         String file = a.positional().get(0);
         SpecSource src;

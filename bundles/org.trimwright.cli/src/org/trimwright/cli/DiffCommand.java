@@ -44,10 +44,7 @@ final class DiffCommand implements Command {
         if (a.positional().size() != 2) {
             throw new UsageException("expected OLD and NEW spec files, got " + a.positional());
         }
-        long trials = a.longValue("trials", CheckCommand.DEFAULT_TRIALS);
-        if (trials < 100 || trials > 100_000_000L) {
-            throw new UsageException("--trials " + trials + " is outside 100..100000000");
-        }
+        long trials = a.trials(100, CheckCommand.DEFAULT_TRIALS);
         AnalysisSettings settings = AnalysisSettings.DEFAULTS.withTrials(trials)
                 .withSeed(a.longValue("seed", AnalysisSettings.DEFAULT_SEED));
         SpecSource oldSpec;

@@ -49,12 +49,8 @@ final class ExportCommand implements Command {
             throw new UsageException("--formats: " + e.getMessage());
         }
         AnalysisSettings settings = AnalysisSettings.DEFAULTS;
-        if (a.has("trials")) {
-            settings = settings.withTrials(number(a.value("trials"), "trials", 1));
-        }
-        if (a.has("seed")) {
-            settings = settings.withSeed(number(a.value("seed"), "seed", Long.MIN_VALUE));
-        }
+        settings = settings.withTrials(a.trials(1, settings.trials()))
+                .withSeed(a.longValue("seed", settings.seed()));
         SpecSource src;
         try {
             src = SpecSource.load(a.positional().isEmpty() ? null : a.positional().get(0));
@@ -78,17 +74,5 @@ final class ExportCommand implements Command {
         }
         err.println(String.format(Locale.ROOT, "trimwright export: done in %.2f s", (System.nanoTime() - t0) / 1e9));
         return 0;
-    }
-
-    private static long number(String v, String name, long min) {
-        try {
-            long x = Long.parseLong(v.trim());
-            if (x < min) {
-                throw new UsageException("--" + name + " must be >= " + min + ", got " + v);
-            }
-            return x;
-        } catch (NumberFormatException e) {
-            throw new UsageException("--" + name + ": '" + v + "' is not a whole number");
-        }
     }
 }
