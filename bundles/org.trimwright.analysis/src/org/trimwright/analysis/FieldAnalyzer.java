@@ -87,16 +87,16 @@ public final class FieldAnalyzer {
     public static FieldReport analyzeQuick(Field field, AnalysisSettings settings) {
         FieldInputs in = FieldInputs.of(field);
         MismatchInputs mm = MismatchInputs.of(field);
-        CodingReport coding = CodingAnalysis.analyzeShared(field.getName(), in.coding(), in.atZero(), in.step(),
-                in.unit(), settings.gateLibrary());
+        CodingReport coding = codingOf(field.getName(), in, settings);
         if (mm == null) {
             return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
         }
-        MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
-                (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
-        MismatchReport report = MismatchAnalysis.run(in.coding(), mm.model(), mm.limits(), options, null,
-                sizing(field));
-        return new FieldReport(in, settings, coding, Optional.of(report), Optional.empty(), Optional.empty());
+        MonteCarloOptions options = options(settings);
+        MismatchReport report = statistics(in.coding(), mm, options, settings.gateLibrary());
+        SizingRequest sizing = sizing(field);
+        SizingResult sized = sizing == null ? null : TrimSizing.size(sizing.withField(report));
+        return new FieldReport(in, settings, coding, Optional.of(report.with(null, sized)), Optional.empty(),
+                Optional.empty());
     }
 
     /**
@@ -107,18 +107,14 @@ public final class FieldAnalyzer {
      */
     public static FieldReport analyze(String name, FieldInputs in, MismatchInputs mm, SizingRequest sizing,
             AnalysisSettings settings) {
-        CodingReport coding = CodingAnalysis.analyzeShared(name, in.coding(), in.atZero(), in.step(), in.unit(),
-                settings.gateLibrary());
+        CodingReport coding = codingOf(name, in, settings);
         if (mm == null) {
             return new FieldReport(in, settings, coding, Optional.empty(), Optional.empty(), Optional.empty());
         }
         FieldCoding c = in.coding();
-        MonteCarloOptions options = new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
-                (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
+        MonteCarloOptions options = options(settings);
         StatisticsKey key = new StatisticsKey(c, settings.gateLibrary(), mm.model(), mm.limits(), options);
-        MismatchReport report = c.bits() <= SHARED_BITS
-                ? MONTE_CARLO.get(key, k -> MismatchAnalysis.run(c, mm.model(), mm.limits(), options))
-                : MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
+        MismatchReport report = statistics(c, mm, options, settings.gateLibrary());
         SegmentationAdvice advice = ADVICE.get(key, k -> SegmentationAdvisor.advise(c.bits(), c.signedFormat(),
                 mm.model(), mm.limits(), options.withTrials(Math.min(settings.trials(), ADVICE_TRIALS)),
                 splitCost(coding, c, settings.gateLibrary()), SegmentationAdvisor.DEFAULT_SWITCH_NAND2_EQ));
@@ -143,6 +139,29 @@ public final class FieldAnalyzer {
         return new FieldReport(in, settings, coding, Optional.of(report), exact, exactDnl);
     }
 
+    private static CodingReport codingOf(String name, FieldInputs in, AnalysisSettings settings) {
+        return CodingAnalysis.analyzeShared(name, in.coding(), in.atZero(), in.step(), in.unit(),
+                settings.gateLibrary());
+    }
+
+    private static MonteCarloOptions options(AnalysisSettings settings) {
+        return new MonteCarloOptions(settings.trials(), settings.seed(), settings.threads(),
+                (int) Math.min(ENVELOPE_TRIALS, settings.trials()));
+    }
+
+    /**
+     * The field's Monte Carlo report before advice and sizing, shared (for fields of at most {@link #SHARED_BITS}
+     * bits) between the quick and the full report and between fields with equal inputs.
+     */
+    private static MismatchReport statistics(FieldCoding c, MismatchInputs mm, MonteCarloOptions options,
+            GateLibrary lib) {
+        if (c.bits() > SHARED_BITS) {
+            return MismatchAnalysis.run(c, mm.model(), mm.limits(), options);
+        }
+        StatisticsKey key = new StatisticsKey(c, lib, mm.model(), mm.limits(), options);
+        return MONTE_CARLO.get(key, k -> MismatchAnalysis.run(c, mm.model(), mm.limits(), options));
+    }
+
     /** The exact methods take independent Gaussian elements without gradients. */
     static boolean exactApplies(MismatchInputs mm) {
         return mm.model().gradient().linear() == 0 && mm.model().gradient().quadratic() == 0;
@@ -158,8 +177,7 @@ public final class FieldAnalyzer {
         }
         int bits = c.bits() - 1;
         int unary = c.scheme() == CodingScheme.SEGMENTED ? Math.min(c.unaryBits(), bits) : 0;
-        return new FieldCoding(bits, c.scheme(), unary, SignedFormat.UNSIGNED, false,
-                c.activeLow());
+        return new FieldCoding(bits, c.scheme(), unary, SignedFormat.UNSIGNED, false, c.activeLow());
     }
 
     private static IntToDoubleFunction splitCost(CodingReport coding, FieldCoding c, GateLibrary lib) {

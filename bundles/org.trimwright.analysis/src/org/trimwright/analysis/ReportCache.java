@@ -38,12 +38,10 @@ public final class ReportCache {
     /** The report of {@code field}, computed now if missing or stale. */
     public FieldReport get(Field field) {
         AnalysisSettings s = settings;
-        String key = fingerprint(field) + "|" + s;
-        synchronized (entries) {
-            Entry e = entries.get(field);
-            if (e != null && e.fingerprint.equals(key)) {
-                return e.report;
-            }
+        String key = key(field, s);
+        FieldReport cached = current(key, field, entries);
+        if (cached != null) {
+            return cached;
         }
         FieldReport report = FieldAnalyzer.analyze(field, s);
         synchronized (entries) {
@@ -60,16 +58,10 @@ public final class ReportCache {
      */
     public FieldReport quick(Field field) {
         AnalysisSettings s = settings;
-        String key = fingerprint(field) + "|" + s;
-        synchronized (entries) {
-            Entry e = entries.get(field);
-            if (e != null && e.fingerprint.equals(key)) {
-                return e.report;
-            }
-            e = quickEntries.get(field);
-            if (e != null && e.fingerprint.equals(key)) {
-                return e.report;
-            }
+        String key = key(field, s);
+        FieldReport cached = current(key, field, entries, quickEntries);
+        if (cached != null) {
+            return cached;
         }
         FieldReport report = FieldAnalyzer.analyzeQuick(field, s);
         synchronized (entries) {
@@ -80,10 +72,24 @@ public final class ReportCache {
 
     /** The cached report if it is current, else null (never computes). */
     public FieldReport peek(Field field) {
-        String key = fingerprint(field) + "|" + settings;
+        return current(key(field, settings), field, entries);
+    }
+
+    private static String key(Field field, AnalysisSettings s) {
+        return fingerprint(field) + "|" + s;
+    }
+
+    /** The first current report of {@code field} in {@code maps}, or null (both maps share the entries lock). */
+    @SafeVarargs
+    private FieldReport current(String key, Field field, Map<Field, Entry>... maps) {
         synchronized (entries) {
-            Entry e = entries.get(field);
-            return e != null && e.fingerprint.equals(key) ? e.report : null;
+            for (Map<Field, Entry> m : maps) {
+                Entry e = m.get(field);
+                if (e != null && e.fingerprint.equals(key)) {
+                    return e.report;
+                }
+            }
+            return null;
         }
     }
 
