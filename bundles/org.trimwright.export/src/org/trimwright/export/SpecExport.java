@@ -21,6 +21,7 @@ import org.trimwright.export.csv.TestTables;
 import org.trimwright.export.doc.DocumentPlan;
 import org.trimwright.export.doc.HtmlDocument;
 import org.trimwright.export.doc.PdfDocument;
+import org.trimwright.export.doc.SharedSections;
 import org.trimwright.export.header.CHeader;
 import org.trimwright.export.ipxact.IpXactComponent;
 import org.trimwright.export.rtl.BlockVerilog;
@@ -42,6 +43,12 @@ import org.trimwright.model.ChipSpec;
  */
 public final class SpecExport {
 
+    /**
+     * How many sections one document writer may run ahead of the other: each section and chart is built once and
+     * read by both, and at most this many are held at a time.
+     */
+    private static final int SECTION_WINDOW = 48;
+
     private SpecExport() {
     }
 
@@ -58,7 +65,9 @@ public final class SpecExport {
     /**
      * Exports {@code spec} into {@code dir} (created if needed), reading and filling {@code cache} (its settings are
      * used; e.g. the workbench's cache, so reports it already has are not recomputed). The HTML and the PDF document
-     * are written concurrently, each on its own thread, while the other formats are written on this one.
+     * are written concurrently, each on its own thread, from one stream of sections that a third thread builds ahead
+     * of them ({@link SharedSections}: every section and chart is built and laid out once), while the other formats
+     * are written on this one.
      */
     public static Result export(ChipSpec spec, Path dir, ExportOptions options, ReportCache cache,
             ExportProgress progress) throws IOException {
@@ -83,17 +92,24 @@ public final class SpecExport {
             t.setDaemon(true);
             return t;
         });
+        SharedSections shared = null;
         try {
             if (docSteps > 0) {
                 DocumentPlan plan = new DocumentPlan(digest, options.date());
                 int sections = countSections(plan);
+                shared = new SharedSections(plan.sections(), docSteps, SECTION_WINDOW);
+                SharedSections feed = shared;
+                int reader = 0;
                 if (formats.contains(ExportFormat.HTML)) {
                     Path p = dir.resolve(chip + "-spec.html");
                     Runnable tick = count.per(sections, n);
+                    int me = reader++;
                     documents.add(docThreads.submit(() -> {
                         count.say("writing " + p.getFileName());
                         try (Writer w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
-                            HtmlDocument.write(plan, w, tick);
+                            HtmlDocument.write(plan, feed.reader(me), w, tick);
+                        } finally {
+                            feed.leave(me);
                         }
                         return p;
                     }));
@@ -101,12 +117,15 @@ public final class SpecExport {
                 if (formats.contains(ExportFormat.PDF)) {
                     Path p = dir.resolve(chip + "-spec.pdf");
                     Runnable tick = count.per(sections, n);
+                    int me = reader++;
                     documents.add(docThreads.submit(() -> {
                         count.say("writing " + p.getFileName());
                         try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 16)) {
-                            PdfDocument.write(plan, o, tick);
+                            PdfDocument.write(plan, feed.reader(me), o, tick);
                         } catch (com.lowagie.text.DocumentException e) {
                             throw new IOException("PDF: " + e.getMessage(), e);
+                        } finally {
+                            feed.leave(me);
                         }
                         return p;
                     }));
@@ -120,6 +139,9 @@ public final class SpecExport {
             files.addAll(0, docs);
         } finally {
             docThreads.shutdownNow();
+            if (shared != null) {
+                shared.close();
+            }
         }
         progress.report(total, total, "done: " + files.size() + " files in " + dir);
         return new Result(files, digest);

@@ -4,6 +4,7 @@ import java.awt.geom.Rectangle2D;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
+import org.trimwright.export.picture.Picture;
 
 /**
  * Draws a chart as an SVG element (vector, text as text) with JFreeSVG. Coordinates are written with 2 decimals
@@ -26,14 +27,28 @@ public final class ChartSvg {
      * @param prefix prefix of the SVG's internal ids, unique within the document
      */
     public static String svg(JFreeChart chart, String prefix) {
-        SVGGraphics2D g = new SVGGraphics2D(WIDTH, HEIGHT);
-        g.setDefsKeyPrefix(prefix);
-        g.setGeomDoubleConverter(v -> fixed(v, 2));
-        g.setTransformDoubleConverter(v -> fixed(v, 4));
+        SVGGraphics2D g = graphics(WIDTH, HEIGHT, prefix);
         chart.draw(g, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
         String s = g.getSVGElement();
         g.dispose();
         return s;
+    }
+
+    /** A recorded chart as one {@code <svg>} element (see {@link #svg(JFreeChart, String)}). */
+    public static String svg(Picture picture, String prefix) {
+        SVGGraphics2D g = graphics(picture.width(), picture.height(), prefix);
+        picture.paint(g);
+        String s = g.getSVGElement();
+        g.dispose();
+        return s;
+    }
+
+    private static SVGGraphics2D graphics(double width, double height, String prefix) {
+        SVGGraphics2D g = new SVGGraphics2D(width, height);
+        g.setDefsKeyPrefix(prefix);
+        g.setGeomDoubleConverter(v -> fixed(v, 2));
+        g.setTransformDoubleConverter(v -> fixed(v, 4));
+        return g;
     }
 
     private static final long[] SCALE = {1, 10, 100, 1000, 10000};

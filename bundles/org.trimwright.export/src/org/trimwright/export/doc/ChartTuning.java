@@ -21,6 +21,7 @@ import org.jfree.chart.renderer.xy.XYItemRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.renderer.xy.XYStepRenderer;
 import org.jfree.chart.text.TextUtils;
+import org.jfree.chart.title.TextTitle;
 
 /**
  * Makes a chart of {@code org.trimwright.charts} cheaper to draw into a document, without changing what it shows:
@@ -43,6 +44,22 @@ final class ChartTuning {
     }
 
     private ChartTuning() {
+    }
+
+    /**
+     * Removes the chart's text subtitles and returns their text joined by "; " (empty when there are none). Our
+     * charts carry the definition or method of their figures in a subtitle; a document prints that text in the
+     * figure caption instead, as searchable text beside the chart, and the chart keeps its plot area.
+     */
+    static String takeNotes(JFreeChart chart) {
+        List<String> notes = new ArrayList<>();
+        for (int i = chart.getSubtitleCount() - 1; i >= 0; i--) {
+            if (chart.getSubtitle(i) instanceof TextTitle t) {
+                notes.add(0, t.getText());
+                chart.removeSubtitle(t);
+            }
+        }
+        return String.join("; ", notes);
     }
 
     /** Tunes {@code chart} in place and returns it. */

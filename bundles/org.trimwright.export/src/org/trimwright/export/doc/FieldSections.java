@@ -162,7 +162,7 @@ public final class FieldSections {
                 + " union bound of exact per-step probabilities; pass yield: Monte Carlo",
                 List.of("M", "B", "switches", "decoder NAND2 eq.", "cost", "worst \u03C3DNL [LSB]",
                         "P(non-monotonic) \u2264", "pass yield", "meets limits"), rows));
-        s.add(new Part.Chart("Cost against risk for each split", () -> ChartTuning.forDocument(FieldCharts.segmentation(r))));
+        s.add(new Part.Chart("Cost against risk for each split", new ChartFigure(() -> FieldCharts.segmentation(r))));
         return s.build();
     }
 
@@ -199,7 +199,7 @@ public final class FieldSections {
                                 : "full table in the CSV test table (too long to print)")
                 : "All " + st.size() + " codes";
         s.add(new Part.Table(caption, STEP_HEADER, rows));
-        s.add(new Part.Chart("Transfer", () -> ChartTuning.forDocument(FieldCharts.transfer(r))));
+        s.add(new Part.Chart("Transfer", new ChartFigure(() -> FieldCharts.transfer(r))));
         return s.build();
     }
 
@@ -281,8 +281,8 @@ public final class FieldSections {
                 + Numbers.p(m.limits().targetYield()) + ")",
                 List.of("INL definition", "worst \u03C3 [LSB]", "mean max|INL| [LSB]", "P(max|INL| < 0.5 LSB)",
                         "P(max|INL| < limit)"), rows));
-        s.add(new Part.Chart("Per-code DNL and INL sigma", () -> ChartTuning.forDocument(FieldCharts.dnlInl(r))));
-        s.add(new Part.Chart("Distribution of max|DNL| and max|INL|", () -> ChartTuning.forDocument(FieldCharts.errorDistribution(r))));
+        s.add(new Part.Chart("Per-code DNL and INL sigma", new ChartFigure(() -> FieldCharts.dnlInl(r))));
+        s.add(new Part.Chart("Distribution of max|DNL| and max|INL|", new ChartFigure(() -> FieldCharts.errorDistribution(r))));
         return s.build();
     }
 

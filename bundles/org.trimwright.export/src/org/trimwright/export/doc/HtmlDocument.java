@@ -45,10 +45,19 @@ public final class HtmlDocument {
 
     /** Writes the whole document; {@code onSection} is told after each section (for progress). */
     public static void write(DocumentPlan plan, Writer out, Runnable onSection) throws IOException {
-        new HtmlDocument(out).document(plan, onSection);
+        write(plan, plan.sections(), out, onSection);
     }
 
-    private void document(DocumentPlan plan, Runnable onSection) throws IOException {
+    /**
+     * Writes the whole document with the sections {@code sections} (the plan's, e.g. shared with the PDF writer
+     * through {@link SharedSections}); {@code onSection} is told after each section.
+     */
+    public static void write(DocumentPlan plan, Iterable<Section> sections, Writer out, Runnable onSection)
+            throws IOException {
+        new HtmlDocument(out).document(plan, sections, onSection);
+    }
+
+    private void document(DocumentPlan plan, Iterable<Section> sections, Runnable onSection) throws IOException {
         DocumentPlan.Title t = plan.title();
         out.write("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n");
         out.write("<meta name=\"generator\" content=\"Trimwright\">\n");
@@ -67,7 +76,7 @@ public final class HtmlDocument {
                     + "</a></li>\n");
         }
         out.write("</ol>\n</nav>\n");
-        for (Section s : plan.sections()) {
+        for (Section s : sections) {
             section(s);
             onSection.run();
         }
@@ -103,8 +112,8 @@ public final class HtmlDocument {
         } else if (p instanceof Part.Chart c) {
             charts++;
             out.write("<figure>\n");
-            out.write(ChartSvg.svg(c.chart().get(), "c" + charts + "_"));
-            out.write("\n<figcaption>" + escape(c.caption()) + "</figcaption>\n</figure>\n");
+            out.write(ChartSvg.svg(c.figure().drawn().picture(), "c" + charts + "_"));
+            out.write("\n<figcaption>" + escape(c.figure().caption(c.caption())) + "</figcaption>\n</figure>\n");
         }
     }
 

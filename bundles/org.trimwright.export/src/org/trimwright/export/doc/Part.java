@@ -1,9 +1,7 @@
 package org.trimwright.export.doc;
 
 import java.util.List;
-import java.util.function.Supplier;
 
-import org.jfree.chart.JFreeChart;
 
 /**
  * One piece of document content, rendered alike by the HTML and the PDF writer (so both carry the same text).
@@ -30,8 +28,8 @@ public sealed interface Part permits Part.Para, Part.KeyValues, Part.Table, Part
         }
     }
 
-    /** A chart built when it is drawn (charts are not kept in memory). */
-    record Chart(String caption, Supplier<JFreeChart> chart) implements Part {
+    /** A chart, built and recorded when a writer first draws it, and painted alike by every writer. */
+    record Chart(String caption, ChartFigure figure) implements Part {
     }
 
     /** A caution: a code or setting that can hurt the chip. */

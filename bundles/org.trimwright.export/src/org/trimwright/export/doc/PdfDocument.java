@@ -2,11 +2,10 @@ package org.trimwright.export.doc;
 
 import java.awt.Color;
 import java.awt.Graphics2D;
-import java.awt.geom.Rectangle2D;
 import java.io.OutputStream;
 import java.util.List;
 
-import org.jfree.chart.JFreeChart;
+import org.trimwright.export.picture.Picture;
 
 import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
@@ -50,6 +49,7 @@ public final class PdfDocument {
     private final Font h3;
     private final Font tableHead;
     private final PdfRowTable rowTable;
+    private final PdfChartCanvas.Shared chartResources;
 
     private PdfDocument(OutputStream out) throws DocumentException {
         doc = new Document(PageSize.A4, 40, 40, 48, 48);
@@ -64,15 +64,25 @@ public final class PdfDocument {
         h3 = new Font(fonts.base(), 10.5f, Font.NORMAL, COPPER);
         tableHead = new Font(fonts.base(), 8f, Font.NORMAL, INK);
         rowTable = new PdfRowTable(doc, writer, fonts.base(), INK);
+        chartResources = new PdfChartCanvas.Shared(fonts.base());
     }
 
     /** Writes the whole document; {@code onSection} is told after each section (for progress). */
     public static void write(DocumentPlan plan, OutputStream out, Runnable onSection) throws DocumentException {
-        PdfDocument p = new PdfDocument(out);
-        p.document(plan, onSection);
+        write(plan, plan.sections(), out, onSection);
     }
 
-    private void document(DocumentPlan plan, Runnable onSection) throws DocumentException {
+    /**
+     * Writes the whole document with the sections {@code sections} (the plan's, e.g. shared with the HTML writer
+     * through {@link SharedSections}); {@code onSection} is told after each section.
+     */
+    public static void write(DocumentPlan plan, Iterable<Section> sections, OutputStream out, Runnable onSection)
+            throws DocumentException {
+        new PdfDocument(out).document(plan, sections, onSection);
+    }
+
+    private void document(DocumentPlan plan, Iterable<Section> sections, Runnable onSection)
+            throws DocumentException {
         DocumentPlan.Title t = plan.title();
         doc.addTitle(t.chip() + " " + t.revision() + " control specification");
         doc.addAuthor(t.author());
@@ -86,7 +96,7 @@ public final class PdfDocument {
             p.setIndentationLeft(e.level() == 1 ? 0 : 14);
             doc.add(p);
         }
-        for (Section s : plan.sections()) {
+        for (Section s : sections) {
             section(s);
             onSection.run();
         }
@@ -168,7 +178,7 @@ public final class PdfDocument {
         } else if (p instanceof Part.Table tab) {
             table(tab);
         } else if (p instanceof Part.Chart c) {
-            chart(c.chart().get(), c.caption());
+            chart(c.figure().drawn().picture(), c.figure().caption(c.caption()));
         }
     }
 
@@ -216,13 +226,14 @@ public final class PdfDocument {
         return c;
     }
 
-    private void chart(JFreeChart chart, String title) throws DocumentException {
+    private void chart(Picture picture, String title) throws DocumentException {
         PdfContentByte cb = writer.getDirectContent();
-        float w = ChartSvg.WIDTH;
-        float h = ChartSvg.HEIGHT;
+        float w = (float) picture.width();
+        float h = (float) picture.height();
         PdfTemplate tp = cb.createTemplate(w, h);
-        Graphics2D g = tp.createGraphics(w, h, fonts);
-        chart.draw(g, new Rectangle2D.Double(0, 0, w, h));
+        Graphics2D g = picture.plain() ? new PdfChartCanvas(tp, h, chartResources)
+                : tp.createGraphics(w, h, fonts);
+        picture.paint(g);
         g.dispose();
         Image img = Image.getInstance(tp);
         img.scaleToFit(CHART_W, CHART_H);
