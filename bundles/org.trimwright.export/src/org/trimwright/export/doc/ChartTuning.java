@@ -8,6 +8,7 @@ import java.util.List;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.AxisState;
 import org.jfree.chart.axis.LogAxis;
+import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.NumberTick;
 import org.jfree.chart.axis.Tick;
 import org.jfree.chart.axis.TickType;
@@ -88,6 +89,12 @@ final class ChartTuning {
                 }
             }
             for (int i = 0; i < p.getRangeAxisCount(); i++) {
+                fastLabels(p.getRangeAxis(i));
+            }
+            for (int i = 0; i < p.getDomainAxisCount(); i++) {
+                fastLabels(p.getDomainAxis(i));
+            }
+            for (int i = 0; i < p.getRangeAxisCount(); i++) {
                 if (p.getRangeAxis(i) != null && p.getRangeAxis(i).getClass() == LogAxis.class) {
                     p.setRangeAxis(i, PlainLogAxis.copyOf((LogAxis) p.getRangeAxis(i)), false);
                 }
@@ -97,6 +104,16 @@ final class ChartTuning {
                     p.setDomainAxis(i, PlainLogAxis.copyOf((LogAxis) p.getDomainAxis(i)), false);
                 }
             }
+        }
+    }
+
+    /** Number axes choose among the same tick units, labelled without {@code DecimalFormat} ({@link FastTickUnits}). */
+    private static void fastLabels(ValueAxis a) {
+        // our charts never give NumberTickUnitSource a formatter of its own; its labels follow the size rule
+        if (a instanceof NumberAxis n && n.getNumberFormatOverride() == null && n.isAutoTickUnitSelection()
+                && n.getStandardTickUnits() != null
+                && n.getStandardTickUnits().getClass() == org.jfree.chart.axis.NumberTickUnitSource.class) {
+            n.setStandardTickUnits(new FastTickUnits(n.getStandardTickUnits()));
         }
     }
 
@@ -142,6 +159,14 @@ final class ChartTuning {
             }
             return p;
         }
+
+        /** Not used: {@link #refreshTicks} labels the ticks itself (LogAxis would format a superscript first). */
+        @Override
+        protected java.text.AttributedString createTickLabel(double value) {
+            return EMPTY;
+        }
+
+        private static final java.text.AttributedString EMPTY = new java.text.AttributedString("");
 
         @Override
         @SuppressWarnings({"rawtypes", "unchecked"})
