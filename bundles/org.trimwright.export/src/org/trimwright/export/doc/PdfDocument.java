@@ -47,7 +47,6 @@ public final class PdfDocument {
     private final Font h1;
     private final Font h2;
     private final Font h3;
-    private final Font tableHead;
     private final PdfRowTable rowTable;
     private final PdfChartCanvas.Shared chartResources;
 
@@ -62,7 +61,6 @@ public final class PdfDocument {
         h1 = new Font(fonts.base(), 17f, Font.NORMAL, INK);
         h2 = new Font(fonts.base(), 14f, Font.NORMAL, INK);
         h3 = new Font(fonts.base(), 10.5f, Font.NORMAL, COPPER);
-        tableHead = new Font(fonts.base(), 8f, Font.NORMAL, INK);
         rowTable = new PdfRowTable(doc, writer, fonts.base(), INK);
         chartResources = new PdfChartCanvas.Shared(fonts.base());
     }
@@ -164,17 +162,8 @@ public final class PdfDocument {
             box.setSpacingBefore(4);
             box.setSpacingAfter(4);
             doc.add(box);
-        } else if (p instanceof Part.KeyValues kv && rowTable.fits(KEY_VALUES, null, rows(kv))) {
-            rowTable.write(KEY_VALUES, null, rows(kv), 4);
         } else if (p instanceof Part.KeyValues kv) {
-            PdfPTable t = new PdfPTable(new float[] {2, 5});
-            t.setWidthPercentage(100);
-            for (String[] row : kv.rows()) {
-                t.addCell(cell(row[0], caption, false));
-                t.addCell(cell(row[1], body, false));
-            }
-            t.setSpacingAfter(4);
-            doc.add(t);
+            rowTable.write(KEY_VALUES, null, rows(kv), 4);
         } else if (p instanceof Part.Table tab) {
             table(tab);
         } else if (p instanceof Part.Chart c) {
@@ -191,28 +180,7 @@ public final class PdfDocument {
     private void table(Part.Table tab) throws DocumentException {
         Paragraph cap = new Paragraph(tab.caption(), caption);
         doc.add(cap);
-        PdfRowTable.Style style = PdfRowTable.data(tab.header().size());
-        if (rowTable.fits(style, tab.header(), tab.rows())) {
-            rowTable.write(style, tab.header(), tab.rows(), 6);
-            return;
-        }
-        PdfPTable t = new PdfPTable(tab.header().size());
-        t.setWidthPercentage(100);
-        t.setHeaderRows(1);
-        for (String h : tab.header()) {
-            PdfPCell c = cell(h, tableHead, false);
-            c.setBackgroundColor(new Color(0xEE, 0xF2, 0xF5));
-            t.addCell(c);
-        }
-        boolean even = false;
-        for (List<String> row : tab.rows()) {
-            for (String v : row) {
-                t.addCell(cell(v, small, even));
-            }
-            even = !even;
-        }
-        t.setSpacingAfter(6);
-        doc.add(t);
+        rowTable.write(PdfRowTable.data(tab.header().size()), tab.header(), tab.rows(), 6);
     }
 
     private PdfPCell cell(String text, Font f, boolean shaded) {

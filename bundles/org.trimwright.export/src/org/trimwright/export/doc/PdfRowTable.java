@@ -1,6 +1,7 @@
 package org.trimwright.export.doc;
 
 import java.awt.Color;
+import java.util.ArrayList;
 import java.util.List;
 
 import com.lowagie.text.Document;
@@ -12,12 +13,13 @@ import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfWriter;
 
 /**
- * Writes a table whose every cell fits on one line directly as page content, with the look of the
- * {@code PdfPTable} it replaces: columns over the text width, one text line per cell, a rule under each row, and for
- * data tables a shaded header row repeated on every page and shaded alternate rows; for label/value rows a muted
- * label column. OpenPDF's {@code PdfPTable} lays out every cell through its own column layout, twice (height, then
- * drawing); for the step tables and key figures of a large spec that was a fifth of the export. Tables with a cell
- * that does not fit on one line are left to {@code PdfPTable} ({@link #fits} is false).
+ * Writes a table directly as page content, with the look of the {@code PdfPTable} it replaces: columns over the text
+ * width, a rule under each row, and for data tables a shaded header row repeated on every page and shaded alternate
+ * rows; for label/value rows a muted label column. Cell text wraps onto as many lines as it needs
+ * ({@link CellLines}); a row is as tall as its tallest cell and moves to the next page when it does not fit, or, when
+ * it is taller than a page, splits between lines ({@link RowLines}). OpenPDF's {@code PdfPTable} lays out every cell
+ * through its own column layout, twice (height, then drawing); for the tables and key figures of a large spec that
+ * was a fifth of the export.
  */
 final class PdfRowTable {
 
@@ -35,12 +37,14 @@ final class PdfRowTable {
     private final Document doc;
     private final PdfWriter writer;
     private final BaseFont font;
+    private final GlyphWidths glyphs;
     private final Color headInk;
 
     PdfRowTable(Document doc, PdfWriter writer, BaseFont font, Color headInk) {
         this.doc = doc;
         this.writer = writer;
         this.font = font;
+        this.glyphs = new GlyphWidths(font);
         this.headInk = headInk;
     }
 
@@ -58,34 +62,6 @@ final class PdfRowTable {
     /** Label/value rows: widths 2:5, the label small and muted, the value in the body font. */
     static Style keyValues(Color labelInk) {
         return new Style(new float[] {2, 5}, new float[] {SMALL, BODY}, new Color[] {labelInk, Color.BLACK}, false);
-    }
-
-    /** Whether every cell of the table (and the header, if any) fits on one line of its column. */
-    boolean fits(Style style, List<String> header, List<? extends List<String>> rows) {
-        if (header != null && !fitsRow(style, header)) {
-            return false;
-        }
-        for (List<String> r : rows) {
-            if (!fitsRow(style, r)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private boolean fitsRow(Style style, List<String> cells) {
-        if (cells.size() != style.widths().length) {
-            return false;
-        }
-        float[] x = columns(style);
-        for (int i = 0; i < cells.size(); i++) {
-            String s = cells.get(i);
-            if (s == null || s.indexOf('\n') >= 0
-                    || font.getWidthPoint(s, style.sizes()[i]) > x[i + 1] - x[i] - 2 * PADDING) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private float[] columns(Style style) {
@@ -109,34 +85,25 @@ final class PdfRowTable {
      */
     void write(Style style, List<String> header, List<? extends List<String>> rows, float spacingAfter)
             throws DocumentException {
-        PdfContentByte cb = writer.getDirectContent();
-        float[] x = columns(style);
-        float maxSize = 0;
-        for (float s : style.sizes()) {
-            maxSize = Math.max(maxSize, s);
-        }
-        float ascent = font.getFontDescriptor(BaseFont.ASCENT, maxSize);
-        float height = 2 * PADDING + ascent - font.getFontDescriptor(BaseFont.DESCENT, maxSize) + 1.5f;
-        Style head = header == null ? null : new Style(style.widths(), style.sizes(), fill(style, headInk), false);
+        Run run = new Run(style, header);
         // the position is the last line's baseline: leave room for its descent
-        float y = writer.getVerticalPosition(true) - 3f;
-        if (y - 2 * height < doc.bottom()) {
-            y = newPage();
+        run.y = writer.getVerticalPosition(true) - 3f;
+        // start on a new page unless the header and a first row (without a header: two rows) fit here
+        float need = run.headHeight;
+        for (int i = 0; i < Math.min(rows.size(), header == null ? 2 : 1); i++) {
+            need += run.lines(style, rows.get(i)).height();
         }
-        if (head != null) {
-            y = row(cb, head, x, header, y, height, ascent, HEAD_FILL);
+        if (run.y - need < doc.bottom() && need <= doc.top() - doc.bottom()) {
+            doc.newPage();
+            run.y = doc.top();
         }
+        run.header();
         boolean even = false;
         for (List<String> r : rows) {
-            if (y - height < doc.bottom()) {
-                y = newPage();
-                if (head != null) {
-                    y = row(cb, head, x, header, y, height, ascent, HEAD_FILL);
-                }
-            }
-            y = row(cb, style, x, r, y, height, ascent, style.banded() && even ? SHADE : null);
+            run.row(style, run.lines(style, r), style.banded() && even ? SHADE : null);
             even = !even;
         }
+        float y = run.y;
         // move the document's own position to below the table with an empty, borderless block as tall as the space
         // used (or a new page when the table ends at the foot of one)
         if (y - spacingAfter - 2 < doc.bottom()) {
@@ -162,36 +129,127 @@ final class PdfRowTable {
         return c;
     }
 
-    private float newPage() {
-        // the page holds direct content, so the document starts a new one
-        doc.newPage();
-        return doc.top();
-    }
+    /** One table being written: its columns, its header, and the position on the page. */
+    private final class Run {
 
-    private float row(PdfContentByte cb, Style style, float[] x, List<String> cells, float top, float height,
-            float ascent, Color fill) {
-        float left = x[0];
-        float width = x[x.length - 1] - left;
-        float bottom = top - height;
-        if (fill != null) {
-            cb.setColorFill(fill);
-            cb.rectangle(left, bottom, width, height);
-            cb.fill();
+        final PdfContentByte cb = writer.getDirectContent();
+        final float[] x;
+        final float ascent;
+        final float base;
+        final Style headStyle;
+        final RowLines head;
+        final float headHeight;
+        /** Top of the next row. */
+        float y;
+        /** Top of the rows on a page the table continues on (below the repeated header): all the room a row gets. */
+        float pageTop;
+
+        Run(Style style, List<String> header) {
+            x = columns(style);
+            float maxSize = 0;
+            for (float s : style.sizes()) {
+                maxSize = Math.max(maxSize, s);
+            }
+            ascent = font.getFontDescriptor(BaseFont.ASCENT, maxSize);
+            base = 2 * PADDING + ascent - font.getFontDescriptor(BaseFont.DESCENT, maxSize) + 1.5f;
+            headStyle = header == null ? null : new Style(style.widths(), style.sizes(), fill(style, headInk), false);
+            head = header == null ? null : lines(headStyle, header);
+            headHeight = head == null ? 0 : head.height();
+            pageTop = doc.top() - headHeight;
         }
-        cb.setColorStroke(RULE);
-        cb.setLineWidth(0.5f);
-        cb.moveTo(left, bottom);
-        cb.lineTo(left + width, bottom);
-        cb.stroke();
-        cb.beginText();
-        float baseline = top - PADDING - ascent;
-        for (int i = 0; i < cells.size(); i++) {
-            cb.setFontAndSize(font, style.sizes()[i]);
-            cb.setColorFill(style.inks()[i]);
-            cb.setTextMatrix(x[i] + PADDING, baseline);
-            cb.showText(cells.get(i));
+
+        /** The row's cells broken into lines of their columns (missing cells are empty). */
+        RowLines lines(Style style, List<String> cells) {
+            int n = style.widths().length;
+            if (cells.size() > n) {
+                throw new IllegalArgumentException("a row of " + cells.size() + " cells in a table of " + n);
+            }
+            List<List<String>> c = new ArrayList<>(n);
+            for (int i = 0; i < n; i++) {
+                String s = i < cells.size() && cells.get(i) != null ? cells.get(i) : "";
+                c.add(CellLines.wrap(glyphs, style.sizes()[i], s, x[i + 1] - x[i] - 2 * PADDING));
+            }
+            return new RowLines(c, style.sizes(), base);
         }
-        cb.endText();
-        return bottom;
+
+        void header() {
+            if (head != null) {
+                draw(headStyle, head, HEAD_FILL);
+            }
+        }
+
+        void newPage() {
+            // the page holds direct content, so the document starts a new one
+            doc.newPage();
+            y = doc.top();
+            header();
+            pageTop = y;
+        }
+
+        /**
+         * Draws a row: on a new page if it does not fit here but does on a page of its own, else split between
+         * lines over as many pages as it needs (every part draws at least one line, so this ends).
+         */
+        void row(Style style, RowLines r, Color fill) {
+            if (r.height() > y - doc.bottom() && y < pageTop && r.height() <= doc.top() - headHeight - doc.bottom()) {
+                newPage();
+            }
+            while (r.height() > y - doc.bottom()) {
+                float space = y - doc.bottom();
+                if (space < base && y < pageTop) {
+                    newPage();
+                    continue;
+                }
+                RowLines rest = r.tail(space);
+                draw(style, r.head(space), fill);
+                if (rest.isEmpty()) {
+                    return;
+                }
+                r = rest;
+                newPage();
+            }
+            draw(style, r, fill);
+        }
+
+        /** Draws the row's fill, its rule and its lines below {@link #y}, cell by cell; moves {@link #y} below it. */
+        void draw(Style style, RowLines r, Color fill) {
+            float left = x[0];
+            float width = x[x.length - 1] - left;
+            float bottom = y - r.height();
+            if (fill != null) {
+                cb.setColorFill(fill);
+                cb.rectangle(left, bottom, width, y - bottom);
+                cb.fill();
+            }
+            cb.setColorStroke(RULE);
+            cb.setLineWidth(0.5f);
+            cb.moveTo(left, bottom);
+            cb.lineTo(left + width, bottom);
+            cb.stroke();
+            cb.beginText();
+            float baseline = y - PADDING - ascent;
+            // font size and fill colour hold for the rest of the row's text: set them only when a cell changes them
+            float size = 0;
+            Color ink = null;
+            for (int i = 0; i < r.cells().size(); i++) {
+                List<String> lines = r.cells().get(i);
+                if (style.sizes()[i] != size) {
+                    size = style.sizes()[i];
+                    cb.setFontAndSize(font, size);
+                }
+                if (!style.inks()[i].equals(ink)) {
+                    ink = style.inks()[i];
+                    cb.setColorFill(ink);
+                }
+                for (int j = 0; j < lines.size(); j++) {
+                    if (!lines.get(j).isEmpty()) {
+                        cb.setTextMatrix(x[i] + PADDING, baseline - j * size);
+                        cb.showText(lines.get(j));
+                    }
+                }
+            }
+            cb.endText();
+            y = bottom;
+        }
     }
 }
