@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Command-level benchmark of `trimwright export`: generates a spec of N trim fields (default 2000) with
-# org.trimwright.model.spec.SyntheticSpecs and times the whole command (JVM start, load, analysis, validation, every
-# format) with a bounded heap. Prints cores, load average, wall and CPU time, max RSS.
+# org.trimwright.model.spec.SyntheticSpecs and times the whole command as users run it, through the ./trimwright
+# launcher and its JVM options (JVM start, load, analysis, validation, every format), with a bounded heap. Prints
+# cores, load average, wall and CPU time, max RSS.
 # Usage: releng/export-benchmark.sh [FIELDS] [HEAP] [extra export options, e.g. --trials 200 --formats html,pdf]
 set -euo pipefail
 HERE="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
@@ -26,7 +27,8 @@ java -cp "$CP" org.trimwright.model.spec.SyntheticSpecs "$FIELDS" "$SPEC"
 echo "cores: $(nproc), load before: $(cut -d' ' -f1-3 /proc/loadavg), heap limit: $HEAP, options: $*"
 set +e
 /usr/bin/time -f "wall %e s, CPU user %U s + system %S s, max RSS %M kB" \
-    java -Xmx"$HEAP" -cp "$CP" org.trimwright.cli.Main export "$SPEC" --out "$WORK/out" "$@" 2>&1 >/dev/null \
+    env TRIMWRIGHT_JAVA_OPTS="-Xmx$HEAP ${BENCH_JAVA_OPTS:-}" "$HERE/trimwright" export "$SPEC" --out "$WORK/out" "$@" \
+    2>&1 >/dev/null \
     | grep -E "^trimwright export: done|^wall|Exception|Error" 
 CODE=${PIPESTATUS[0]}
 set -e
