@@ -1,8 +1,5 @@
 package org.trimwright.charts;
 
-import java.util.ArrayList;
-import java.util.Comparator;
-import java.util.List;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
@@ -12,7 +9,6 @@ import org.jfree.chart.renderer.xy.XYStepRenderer;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.trimwright.analysis.FieldReport;
-import org.trimwright.engine.coding.StepRow;
 import org.trimwright.engine.coding.StepTable;
 import org.trimwright.engine.mismatch.MismatchReport;
 
@@ -67,11 +63,16 @@ public final class TransferChart {
 
     /** Nominal values per code sorted by signed step count (ties by code). */
     static XYSeriesCollection nominal(StepTable table) {
-        List<StepRow> rows = new ArrayList<>(table.rows());
-        rows.sort(Comparator.comparingInt(StepRow::signedSteps).thenComparingInt(StepRow::code));
+        // sort (signed steps, code) pairs packed in one long each: no row objects for what is two numbers per code
+        long[] order = new long[table.size()];
+        for (int code = 0; code < order.length; code++) {
+            order[code] = ((long) table.map().signedSteps(code) << 32) | code;
+        }
+        java.util.Arrays.sort(order);
         XYSeries s = new XYSeries("nominal step value", false, true);
-        for (StepRow row : rows) {
-            s.add(row.signedSteps(), row.value(), false);
+        for (long o : order) {
+            int code = (int) o;
+            s.add(table.map().signedSteps(code), table.value(code), false);
         }
         return new XYSeriesCollection(s);
     }

@@ -27,6 +27,8 @@ import org.jfree.chart.title.TextTitle;
 /**
  * Makes a chart of {@code org.trimwright.charts} cheaper to draw into a document, without changing what it shows:
  * <ul>
+ * <li>no tick marks outside the axes (the grid lines mark the ticks), and tick labels formatted without
+ * {@code DecimalFormat} ({@link FastTickUnits});</li>
  * <li>line and step series are drawn as one path per series instead of one element per segment (far fewer SVG elements
  * and PDF operators; {@link PathStepRenderer}, {@link PathBandRenderer} for the outlines of a band);</li>
  * <li>logarithmic axes label their decades as plain text {@code 1e-6} instead of a superscript exponent: the
@@ -90,9 +92,11 @@ final class ChartTuning {
             }
             for (int i = 0; i < p.getRangeAxisCount(); i++) {
                 fastLabels(p.getRangeAxis(i));
+                noTickMarks(p.getRangeAxis(i));
             }
             for (int i = 0; i < p.getDomainAxisCount(); i++) {
                 fastLabels(p.getDomainAxis(i));
+                noTickMarks(p.getDomainAxis(i));
             }
             for (int i = 0; i < p.getRangeAxisCount(); i++) {
                 if (p.getRangeAxis(i) != null && p.getRangeAxis(i).getClass() == LogAxis.class) {
@@ -104,6 +108,17 @@ final class ChartTuning {
                     p.setDomainAxis(i, PlainLogAxis.copyOf((LogAxis) p.getDomainAxis(i)), false);
                 }
             }
+        }
+    }
+
+    /**
+     * No tick marks outside the axes: the grid lines already mark every tick, and in a document of thousands of
+     * charts the marks were a tenth of all drawing calls.
+     */
+    private static void noTickMarks(ValueAxis a) {
+        if (a != null) {
+            a.setTickMarksVisible(false);
+            a.setMinorTickMarksVisible(false);
         }
     }
 

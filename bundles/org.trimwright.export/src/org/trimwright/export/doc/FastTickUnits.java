@@ -5,8 +5,6 @@ import java.text.DecimalFormatSymbols;
 import java.text.FieldPosition;
 import java.text.NumberFormat;
 import java.text.ParsePosition;
-import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 
 import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.axis.TickUnit;
@@ -23,8 +21,6 @@ import org.jfree.chart.axis.TickUnitSource;
  */
 final class FastTickUnits implements TickUnitSource {
 
-    private static final Map<String, Fixed> FORMATS = new ConcurrentHashMap<>();
-    private static final Map<String, Fixed> BY_PATTERN = new ConcurrentHashMap<>();
 
     private final TickUnitSource delegate;
 
@@ -61,15 +57,19 @@ final class FastTickUnits implements TickUnitSource {
             return t;
         }
         int power = (int) Math.floor(Math.log10(n.getSize()) + 1e-9);
-        Fixed f;
-        if (power >= -4 && power <= -1) {
-            f = Fixed.of(new DecimalFormat("0." + "0".repeat(-power)));
-        } else if (power >= 0 && power <= 6) {
-            f = Fixed.of(new DecimalFormat("#,##0"));
-        } else {
+        if (power < -4 || power > 6) {
             return t;
         }
-        return new NumberTickUnit(n.getSize(), f, n.getMinorTickCount());
+        return new NumberTickUnit(n.getSize(), BY_POWER[power + 4], n.getMinorTickCount());
+    }
+
+    /** The format for sizes 10^p, p = -4..6 (as NumberTickUnitSource picks them, in this JVM's locale). */
+    private static final Fixed[] BY_POWER = new Fixed[11];
+
+    static {
+        for (int p = -4; p <= 6; p++) {
+            BY_POWER[p + 4] = Fixed.of(new DecimalFormat(p < 0 ? "0." + "0".repeat(-p) : "#,##0"));
+        }
     }
 
     /**
@@ -102,11 +102,6 @@ final class FastTickUnits implements TickUnitSource {
                 return null;
             }
             String p = d.toPattern();
-            String key0 = p + "/" + d.getDecimalFormatSymbols().getDecimalSeparator();
-            Fixed known = BY_PATTERN.get(key0);
-            if (known != null) {
-                return known;
-            }
             int decimals = d.getMaximumFractionDigits();
             if (!p.matches("[#,0]*0(\\.0{1,4})?") || decimals != d.getMinimumFractionDigits() || decimals > 4
                     || d.getMultiplier() != 1 || d.getMinimumIntegerDigits() != 1) {
@@ -114,12 +109,8 @@ final class FastTickUnits implements TickUnitSource {
             }
             DecimalFormatSymbols s = d.getDecimalFormatSymbols();
             int groupingSize = d.isGroupingUsed() ? d.getGroupingSize() : 0;
-            String key = decimals + "/" + groupingSize + "/" + s.getGroupingSeparator() + s.getDecimalSeparator()
-                    + s.getMinusSign();
-            Fixed made = FORMATS.computeIfAbsent(key, k -> new Fixed(decimals, groupingSize, s.getGroupingSeparator(),
-                    s.getDecimalSeparator(), s.getMinusSign()));
-            BY_PATTERN.put(key0, made);
-            return made;
+            return new Fixed(decimals, groupingSize, s.getGroupingSeparator(), s.getDecimalSeparator(),
+                    s.getMinusSign());
         }
 
         @Override

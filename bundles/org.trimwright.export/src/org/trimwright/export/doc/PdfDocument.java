@@ -4,6 +4,7 @@ import java.awt.Color;
 import java.awt.Graphics2D;
 import java.io.OutputStream;
 import java.util.List;
+import java.util.zip.Deflater;
 
 import org.trimwright.export.picture.Picture;
 
@@ -54,6 +55,9 @@ public final class PdfDocument {
         doc = new Document(PageSize.A4, 40, 40, 48, 48);
         writer = PdfWriter.getInstance(doc, out);
         writer.setFullCompression();
+        // zlib's fastest level: compressing thousands of pages and charts at the default level cost a fifth of the
+        // PDF writer's time, for a file about a tenth smaller
+        writer.setCompressionLevel(Deflater.BEST_SPEED);
         writer.setStrictImageSequence(true);
         body = new Font(fonts.base(), 9.5f);
         small = new Font(fonts.base(), 8f);
