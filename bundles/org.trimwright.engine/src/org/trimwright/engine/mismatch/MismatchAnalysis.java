@@ -144,7 +144,7 @@ public final class MismatchAnalysis {
         double[] b = new double[array.binaryBits()];
         array.meanValues(u, b);
         double[] nominal = codes.transfer(u, b);
-        double[] systematic = codes.inl(nominal)[0];
+        double[] systematic = codes.inlEndpoint(nominal);
         int levels = codes.levels();
         int env = (int) Math.min(options.envelopeTrials(), Math.max(10, ENVELOPE_WORK / levels));
         env = (int) Math.min(env, options.trials());
@@ -163,7 +163,7 @@ public final class MismatchAnalysis {
                 sampler.draw(g, u, b);
                 double[] v = codes.transfer(u, b);
                 double[] d = codes.dnl(v);
-                double[] i = codes.inl(v)[0];
+                double[] i = codes.inlEndpoint(v);
                 for (int k = 0; k < levels; k++) {
                     dnlMin[k] = Math.min(dnlMin[k], d[k]);
                     dnlMax[k] = Math.max(dnlMax[k], d[k]);

@@ -16,7 +16,6 @@ public final class AllCodesEvaluator {
 
     private final FieldCoding coding;
     private final int unary;
-    private final int bits;
     private final int weightShift;
     private final int levels;
     private final int minSigned;
@@ -24,7 +23,6 @@ public final class AllCodesEvaluator {
     public AllCodesEvaluator(ElementArray array) {
         this.coding = array.coding();
         this.unary = array.unaryCount();
-        this.bits = array.binaryBits();
         this.weightShift = array.binaryBits();
         int n = coding.bits();
         int lo = Integer.MAX_VALUE;
@@ -62,23 +60,25 @@ public final class AllCodesEvaluator {
         for (int k = 0; k < unary; k++) {
             onSum[k + 1] = onSum[k] + unaryValues[k];
         }
+        // every level the walk below can ask for (u never exceeds the unary count)
+        double[] mag = magnitudes(Math.min(1 << n, onSum.length << weightShift), onSum, binaryValues);
         for (int reg = 0; reg < (1 << n); reg++) {
             int code = coding.scheme() == CodingScheme.GRAY ? grayToBinary(reg) : reg;
             int s = coding.signedFormat().signedValue(code, n);
             double value;
             switch (coding.signedFormat()) {
                 case SIGN_MAGNITUDE:
-                    double mag = magnitude(code & (half - 1), onSum, binaryValues);
-                    value = (code & half) != 0 ? -mag : mag;
+                    double m = mag[code & (half - 1)];
+                    value = (code & half) != 0 ? -m : m;
                     break;
                 case TWOS_COMPLEMENT:
-                    value = magnitude(code ^ half, onSum, binaryValues) - half;
+                    value = mag[code ^ half] - half;
                     break;
                 case OFFSET_BINARY:
-                    value = magnitude(code, onSum, binaryValues) - half;
+                    value = mag[code] - half;
                     break;
                 default:
-                    value = magnitude(code, onSum, binaryValues);
+                    value = mag[code];
                     break;
             }
             v[s - minSigned] = value;
@@ -86,17 +86,26 @@ public final class AllCodesEvaluator {
         return v;
     }
 
-    /** Thermometer outputs k &lt; u are on: their sum is onSum[u] (running sums of the unary elements). */
-    private double magnitude(int level, double[] onSum, double[] binaryValues) {
-        int u = level >>> weightShift;
-        int r = level & ((1 << weightShift) - 1);
-        double sum = onSum[u];
-        for (int j = 0; j < bits; j++) {
-            if ((r >>> j & 1) != 0) {
-                sum += binaryValues[j];
+    /**
+     * The magnitude of every level below {@code count}: level = u * 2^B + r switches on the thermometer outputs
+     * k &lt; u (their sum is onSum[u], running sums of the unary elements) and the binary elements of the bits of r.
+     * Each level's sum is the sum of the level without r's highest bit plus that bit's element, so the binary
+     * elements are added from the lowest bit up, onto onSum[u]: the same additions, in the same order, as summing
+     * the level on its own, with one addition per level instead of one per bit.
+     */
+    private double[] magnitudes(int count, double[] onSum, double[] binaryValues) {
+        double[] mag = new double[count];
+        int mask = (1 << weightShift) - 1;
+        for (int level = 0; level < count; level++) {
+            int r = level & mask;
+            if (r == 0) {
+                mag[level] = onSum[level >>> weightShift];
+            } else {
+                int high = Integer.highestOneBit(r);
+                mag[level] = mag[level ^ high] + binaryValues[Integer.numberOfTrailingZeros(high)];
             }
         }
-        return sum;
+        return mag;
     }
 
     private static int grayToBinary(int g) {
@@ -159,11 +168,24 @@ public final class AllCodesEvaluator {
         }
         double slope = sxy / sxx;
         double intercept = meanY - slope * meanX;
-        double[][] out = new double[3][k1];
+        double[][] out = new double[3][];
+        out[0] = inlEndpoint(v);
+        out[1] = new double[k1];
+        out[2] = new double[k1];
         for (int k = 0; k < k1; k++) {
-            out[0][k] = g > 0 ? (v[k] - v[0] - g * k) / g : Double.POSITIVE_INFINITY;
             out[1][k] = slope > 0 ? (v[k] - intercept - slope * k) / slope : Double.POSITIVE_INFINITY;
             out[2][k] = v[k] - nominal(k);
+        }
+        return out;
+    }
+
+    /** Endpoint INL per level in its own LSB: the first of {@link #inl}'s definitions on its own. */
+    public double[] inlEndpoint(double[] v) {
+        int k1 = v.length;
+        double g = (v[k1 - 1] - v[0]) / (k1 - 1);
+        double[] out = new double[k1];
+        for (int k = 0; k < k1; k++) {
+            out[k] = g > 0 ? (v[k] - v[0] - g * k) / g : Double.POSITIVE_INFINITY;
         }
         return out;
     }
