@@ -106,7 +106,9 @@ public final class SpecExport {
                     int me = reader++;
                     documents.add(docThreads.submit(() -> {
                         count.say("writing " + p.getFileName());
-                        try (Writer w = Files.newBufferedWriter(p, StandardCharsets.UTF_8)) {
+                        // large writes: the HTML of a big spec is hundreds of megabytes
+                        try (Writer w = new java.io.OutputStreamWriter(new BufferedOutputStream(
+                                Files.newOutputStream(p), 1 << 20), StandardCharsets.UTF_8)) {
                             HtmlDocument.write(plan, feed.reader(me), w, tick);
                         } finally {
                             feed.leave(me);
@@ -120,7 +122,7 @@ public final class SpecExport {
                     int me = reader++;
                     documents.add(docThreads.submit(() -> {
                         count.say("writing " + p.getFileName());
-                        try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 16)) {
+                        try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 20)) {
                             PdfDocument.write(plan, feed.reader(me), o, tick);
                         } catch (com.lowagie.text.DocumentException e) {
                             throw new IOException("PDF: " + e.getMessage(), e);

@@ -40,7 +40,8 @@ public final class TestTables {
             out.write(',');
             out.write(CsvCells.number((long) row.code()));
             out.write(',');
-            out.write(String.format(Locale.ROOT, "0x%X", f.registerValue(row.code())));
+            out.write("0x");
+            out.write(Long.toHexString(f.registerValue(row.code())).toUpperCase(Locale.ROOT));
             out.write(',');
             out.write(row.registerBits());
             out.write(',');
