@@ -1,6 +1,5 @@
 package org.trimwright.engine.units;
 
-import java.util.Locale;
 
 /**
  * A number with an SI unit, e.g. {@code 1.2V}, {@code 4mV}, {@code 1.5uA}, {@code 10kOhm}, {@code 2.5MHz},
@@ -96,13 +95,24 @@ public record SiValue(double value, SiUnit unit) {
         return plain(scaled) + FORMAT_PREFIXES[(exp3 + 15) / 3] + unit.symbol();
     }
 
+    /**
+     * 4 significant digits ({@code %.4g}), trailing zeros dropped; {@code %.3e} where {@code %.4g} is scientific
+     * (the same text: both round the same digits).
+     */
     private static String plain(double v) {
-        String s = String.format(Locale.ROOT, "%.4g", v);
-        if (s.contains("e") || s.contains("E")) {
-            return String.format(Locale.ROOT, "%.3e", v);
+        String s = Significant.general(v, 4);
+        if (s.indexOf('e') >= 0) {
+            return s;
         }
-        if (s.contains(".")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        if (s.indexOf('.') >= 0) {
+            int end = s.length();
+            while (s.charAt(end - 1) == '0') {
+                end--;
+            }
+            if (s.charAt(end - 1) == '.') {
+                end--;
+            }
+            s = s.substring(0, end);
         }
         return s.equals("-0") ? "0" : s;
     }

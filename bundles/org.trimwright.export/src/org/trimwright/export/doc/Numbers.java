@@ -4,6 +4,7 @@ import java.util.Locale;
 
 import org.trimwright.engine.memo.BoundedMemo;
 import org.trimwright.engine.units.SiUnit;
+import org.trimwright.engine.units.Significant;
 import org.trimwright.engine.units.SiValue;
 
 /** Number formats of the document. */
@@ -21,9 +22,9 @@ public final class Numbers {
             return "0";
         }
         if (Math.abs(v) < 1e-3) {
-            return String.format(Locale.ROOT, "%.3e", v);
+            return Significant.scientific(v, 3);
         }
-        return String.format(Locale.ROOT, "%.4g", v);
+        return Significant.general(v, 4);
     }
 
     /** A value in LSB, 3 decimals. */
@@ -33,7 +34,7 @@ public final class Numbers {
 
     /** A plain number, 4 significant digits. */
     public static String g(double v) {
-        return String.format(Locale.ROOT, "%.4g", v);
+        return Significant.general(v, 4);
     }
 
     /** A physical value with engineering prefix. */

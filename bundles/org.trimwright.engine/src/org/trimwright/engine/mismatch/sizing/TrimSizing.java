@@ -51,6 +51,6 @@ public final class TrimSizing {
     }
 
     private static String sci(double p) {
-        return String.format(java.util.Locale.ROOT, "%.3g", p);
+        return org.trimwright.engine.units.Significant.general(p, 3);
     }
 }
