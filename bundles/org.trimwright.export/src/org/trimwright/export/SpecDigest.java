@@ -43,6 +43,15 @@ public record SpecDigest(ChipSpec spec, List<ExportedField> fields, Map<String, 
      */
     public static SpecDigest of(ChipSpec spec, ExportOptions options, ReportCache cache, ExportProgress progress,
             int total) {
+        return analysed(spec, options, cache, progress, total).withProblems(options, cache);
+    }
+
+    /**
+     * Analyses every field through {@code cache} (reports already there are reused); the digest has no problems
+     * and no checks yet ({@link #withProblems}).
+     */
+    public static SpecDigest analysed(ChipSpec spec, ExportOptions options, ReportCache cache,
+            ExportProgress progress, int total) {
         List<Field> all = new ArrayList<>();
         for (Block b : spec.getBlocks()) {
             for (Register r : b.getRegisters()) {
@@ -55,20 +64,25 @@ public record SpecDigest(ChipSpec spec, List<ExportedField> fields, Map<String, 
             byBlock.computeIfAbsent(f.block(), k -> new ArrayList<>()).add(f);
         }
         byBlock.replaceAll((k, v) -> List.copyOf(v));
-        Map<String, List<Problem>> problems = new LinkedHashMap<>();
+        return new SpecDigest(spec, List.copyOf(out), Map.of(), List.of(), byBlock);
+    }
+
+    /** This digest with the problems of the options' sources (and the structural checks), run on {@code cache}. */
+    public SpecDigest withProblems(ExportOptions options, ReportCache cache) {
+        Map<String, List<Problem>> found = new LinkedHashMap<>();
         List<ProblemSource> sources = new ArrayList<>();
         if (options.problemSources().stream().noneMatch(ProblemSource::coversStructure)) {
             sources.add(new StructuralProblems());
         }
         sources.addAll(options.problemSources());
-        List<String> checks = new ArrayList<>();
+        List<String> ran = new ArrayList<>();
         for (ProblemSource s : sources) {
-            checks.add(s.name());
+            ran.add(s.name());
             for (Problem p : s.problems(spec, cache)) {
-                problems.computeIfAbsent(p.path(), k -> new ArrayList<>()).add(p);
+                found.computeIfAbsent(p.path(), k -> new ArrayList<>()).add(p);
             }
         }
-        return new SpecDigest(spec, List.copyOf(out), problems, List.copyOf(checks), byBlock);
+        return new SpecDigest(spec, fields, found, List.copyOf(ran), byBlock);
     }
 
     private static List<ExportedField> analyse(List<Field> all, ReportCache cache, int threads,

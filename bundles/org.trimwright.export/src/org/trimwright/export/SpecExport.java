@@ -15,6 +15,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicReference;
 
 import org.trimwright.analysis.ReportCache;
 import org.trimwright.export.csv.TestTables;
@@ -64,10 +65,10 @@ public final class SpecExport {
 
     /**
      * Exports {@code spec} into {@code dir} (created if needed), reading and filling {@code cache} (its settings are
-     * used; e.g. the workbench's cache, so reports it already has are not recomputed). The HTML and the PDF document
-     * are written concurrently, each on its own thread, from one stream of sections that a third thread builds ahead
-     * of them ({@link SharedSections}: every section and chart is built and laid out once), while the other formats
-     * are written on this one.
+     * used; e.g. the workbench's cache, so reports it already has are not recomputed). Once every field is analysed,
+     * this thread writes RTL, header, CSV and IP-XACT (they need no validation) while another runs the validation and
+     * then starts the HTML and the PDF writer, each on its own thread, on one stream of sections that a further
+     * thread builds ahead of them ({@link SharedSections}: every section and chart is built and laid out once).
      */
     public static Result export(ChipSpec spec, Path dir, ExportOptions options, ReportCache cache,
             ExportProgress progress) throws IOException {
@@ -82,74 +83,95 @@ public final class SpecExport {
         int docSteps = (formats.contains(ExportFormat.HTML) ? 1 : 0) + (formats.contains(ExportFormat.PDF) ? 1 : 0);
         int total = n * (1 + docSteps + (formats.contains(ExportFormat.CSV) ? 1 : 0)) + spec.getBlocks().size() + 2;
         Counter count = new Counter(progress, total);
-        SpecDigest digest = SpecDigest.of(spec, options, cache, count::fromDigest, total);
+        SpecDigest analysed = SpecDigest.analysed(spec, options, cache, count::fromDigest, total);
         count.advance(n);
+        int fields = n;
         String chip = CNames.identifier(spec.getName());
         List<Path> files = new ArrayList<>();
-        List<Future<Path>> documents = new ArrayList<>();
-        ExecutorService docThreads = Executors.newFixedThreadPool(Math.max(1, docSteps), r -> {
+        // one thread per document, and one that runs the validation and then starts the documents (the problem
+        // overview comes early in them), while this thread writes the formats that need no validation
+        ExecutorService docThreads = Executors.newFixedThreadPool(docSteps + 1, r -> {
             Thread t = new Thread(r, "trimwright-export-document");
             t.setDaemon(true);
             return t;
         });
-        SharedSections shared = null;
+        AtomicReference<SharedSections> shared = new AtomicReference<>();
         try {
-            if (docSteps > 0) {
-                DocumentPlan plan = new DocumentPlan(digest, options.date());
-                int sections = countSections(plan);
-                shared = new SharedSections(plan.sections(), docSteps, SECTION_WINDOW);
-                SharedSections feed = shared;
-                int reader = 0;
-                if (formats.contains(ExportFormat.HTML)) {
-                    Path p = dir.resolve(chip + "-spec.html");
-                    Runnable tick = count.per(sections, n);
-                    int me = reader++;
-                    documents.add(docThreads.submit(() -> {
-                        count.say("writing " + p.getFileName());
-                        // large writes: the HTML of a big spec is hundreds of megabytes
-                        try (Writer w = new java.io.OutputStreamWriter(new BufferedOutputStream(
-                                Files.newOutputStream(p), 1 << 20), StandardCharsets.UTF_8)) {
-                            HtmlDocument.write(plan, feed.reader(me), w, tick);
-                        } finally {
-                            feed.leave(me);
-                        }
-                        return p;
-                    }));
-                }
-                if (formats.contains(ExportFormat.PDF)) {
-                    Path p = dir.resolve(chip + "-spec.pdf");
-                    Runnable tick = count.per(sections, n);
-                    int me = reader++;
-                    documents.add(docThreads.submit(() -> {
-                        count.say("writing " + p.getFileName());
-                        try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 20)) {
-                            PdfDocument.write(plan, feed.reader(me), o, tick);
-                        } catch (com.lowagie.text.DocumentException e) {
-                            throw new IOException("PDF: " + e.getMessage(), e);
-                        } finally {
-                            feed.leave(me);
-                        }
-                        return p;
-                    }));
-                }
-            }
-            others(spec, dir, digest, formats, chip, files, count);
+            Future<Started> started = docThreads.submit(() -> {
+                SpecDigest full = analysed.withProblems(options, cache);
+                return new Started(full, documents(full, dir, options, chip, fields, count, docThreads, shared));
+            });
+            others(spec, dir, analysed, formats, chip, files, count);
+            Started s = await(started);
             List<Path> docs = new ArrayList<>();
-            for (Future<Path> f : documents) {
+            for (Future<Path> f : s.documents()) {
                 docs.add(await(f));
             }
             files.addAll(0, docs);
+            progress.report(total, total, "done: " + files.size() + " files in " + dir);
+            return new Result(files, s.digest());
         } finally {
             docThreads.shutdownNow();
-            if (shared != null) {
-                shared.close();
+            if (shared.get() != null) {
+                shared.get().close();
             }
         }
-        progress.report(total, total, "done: " + files.size() + " files in " + dir);
-        return new Result(files, digest);
     }
 
-    private static Path await(Future<Path> f) throws IOException {
+    /** The validated digest and the document writers started from it. */
+    private record Started(SpecDigest digest, List<Future<Path>> documents) {
+    }
+
+    /** Starts the HTML and PDF writers (those requested) on {@code threads}, sharing one stream of sections. */
+    private static List<Future<Path>> documents(SpecDigest digest, Path dir, ExportOptions options, String chip, int n,
+            Counter count, ExecutorService threads, AtomicReference<SharedSections> shared) {
+        Set<ExportFormat> formats = options.formats();
+        int docSteps = (formats.contains(ExportFormat.HTML) ? 1 : 0) + (formats.contains(ExportFormat.PDF) ? 1 : 0);
+        List<Future<Path>> documents = new ArrayList<>();
+        if (docSteps == 0) {
+            return documents;
+        }
+        DocumentPlan plan = new DocumentPlan(digest, options.date());
+        int sections = countSections(plan);
+        SharedSections feed = new SharedSections(plan.sections(), docSteps, SECTION_WINDOW);
+        shared.set(feed);
+        int reader = 0;
+        if (formats.contains(ExportFormat.HTML)) {
+            Path p = dir.resolve(chip + "-spec.html");
+            Runnable tick = count.per(sections, n);
+            int me = reader++;
+            documents.add(threads.submit(() -> {
+                count.say("writing " + p.getFileName());
+                // large writes: the HTML of a big spec is hundreds of megabytes
+                try (Writer w = new java.io.OutputStreamWriter(new BufferedOutputStream(Files.newOutputStream(p),
+                        1 << 20), StandardCharsets.UTF_8)) {
+                    HtmlDocument.write(plan, feed.reader(me), w, tick);
+                } finally {
+                    feed.leave(me);
+                }
+                return p;
+            }));
+        }
+        if (formats.contains(ExportFormat.PDF)) {
+            Path p = dir.resolve(chip + "-spec.pdf");
+            Runnable tick = count.per(sections, n);
+            int me = reader++;
+            documents.add(threads.submit(() -> {
+                count.say("writing " + p.getFileName());
+                try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 20)) {
+                    PdfDocument.write(plan, feed.reader(me), o, tick);
+                } catch (com.lowagie.text.DocumentException e) {
+                    throw new IOException("PDF: " + e.getMessage(), e);
+                } finally {
+                    feed.leave(me);
+                }
+                return p;
+            }));
+        }
+        return documents;
+    }
+
+    private static <T> T await(Future<T> f) throws IOException {
         try {
             return f.get();
         } catch (InterruptedException e) {
