@@ -58,6 +58,24 @@ class PictureTest {
         return n;
     }
 
+    /** Pixels where some colour channel differs by more than {@code by} (antialiased edges differ by less). */
+    private static long differingBy(BufferedImage a, BufferedImage b, int by) {
+        long n = 0;
+        for (int y = 0; y < H; y++) {
+            for (int x = 0; x < W; x++) {
+                int p = a.getRGB(x, y);
+                int q = b.getRGB(x, y);
+                for (int shift = 0; shift < 24; shift += 8) {
+                    if (Math.abs(((p >> shift) & 0xFF) - ((q >> shift) & 0xFF)) > by) {
+                        n++;
+                        break;
+                    }
+                }
+            }
+        }
+        return n;
+    }
+
     private static Picture record(Consumer<Graphics2D> draw) {
         RecordingGraphics r = new RecordingGraphics(W, H);
         draw.accept(r);
@@ -83,6 +101,31 @@ class PictureTest {
             BufferedImage replayed = raster(p::paint);
             assertEquals(0, differing(direct, replayed), c.getTitle().getText());
             assertTrue(p.size() > 100, "a chart is hundreds of calls: " + p.size());
+        }
+    }
+
+    /**
+     * Runs of lines in one style (grid lines) recorded as one path each, as the document records its charts: fewer
+     * calls, and the pixels of the JDK's rendering differ only where lines of one run cross or touch (covered once
+     * instead of twice), by less than a quarter of the colour range.
+     */
+    @Test
+    void mergedLineRunsLookTheSameWithFewerCalls() {
+        FieldReport r = demoReport("FREQ_COARSE");
+        for (JFreeChart c : new JFreeChart[] {FieldCharts.transfer(r), FieldCharts.dnlInl(r),
+            FieldCharts.errorDistribution(r), FieldCharts.segmentation(r)}) {
+            Rectangle2D area = new Rectangle2D.Double(0, 0, W, H);
+            // as the document records it (tuned for print, runs of lines merged); the chart is tuned in place
+            Picture merged = new org.trimwright.export.doc.ChartFigure(() -> c).drawn().picture();
+            BufferedImage direct = raster(g -> c.draw(g, area));
+            Picture each = record(g -> c.draw(g, area));
+            long differ = differingBy(direct, raster(merged::paint), 64);
+            assertTrue(differ < W * H / 1000, c.getTitle().getText() + ": " + differ + " pixels differ");
+            assertTrue(merged.size() < each.size(), merged.size() + " calls against " + each.size());
+            String svgEach = org.trimwright.export.doc.ChartSvg.svg(each, "e_");
+            String svgMerged = org.trimwright.export.doc.ChartSvg.svg(merged, "m_");
+            assertTrue(svgEach.split("<line", -1).length > 10, "grid lines drawn one by one");
+            assertEquals(1, svgMerged.split("<line", -1).length, "no separate line elements left");
         }
     }
 

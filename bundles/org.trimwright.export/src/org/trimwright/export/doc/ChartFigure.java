@@ -41,7 +41,8 @@ public final class ChartFigure {
 
     /** {@code chart} laid out and recorded at the document chart size. */
     static Picture record(JFreeChart chart) {
-        RecordingGraphics g = new RecordingGraphics(ChartSvg.WIDTH, ChartSvg.HEIGHT);
+        // grid lines (and any other run of lines in one style) become one path each
+        RecordingGraphics g = new RecordingGraphics(ChartSvg.WIDTH, ChartSvg.HEIGHT, true);
         chart.draw(g, new Rectangle2D.Double(0, 0, ChartSvg.WIDTH, ChartSvg.HEIGHT));
         g.dispose();
         return g.picture();

@@ -18,6 +18,8 @@ import java.awt.Stroke;
 import java.awt.font.FontRenderContext;
 import java.awt.font.GlyphVector;
 import java.awt.geom.AffineTransform;
+import java.awt.geom.Line2D;
+import java.awt.geom.Path2D;
 import java.awt.image.BufferedImage;
 import java.awt.image.BufferedImageOp;
 import java.awt.image.ImageObserver;
@@ -55,6 +57,14 @@ public final class RecordingGraphics extends Graphics2D {
         final List<Picture.Op> ops = new ArrayList<>(512);
         int targets = 1;
         boolean plain = true;
+        /** Drawing calls recorded so far (state calls not counted). */
+        long draws;
+        /** Lines drawn one after another in one state, gathered into one path (see mergeLines); null if none. */
+        Path2D.Double lines;
+        /** The graphics that drew {@link #lines}, the draw count after it, and its state then. */
+        RecordingGraphics linesBy;
+        long linesDraws;
+        Object[] linesState;
     }
 
     private final Tape tape;
@@ -69,15 +79,37 @@ public final class RecordingGraphics extends Graphics2D {
     private Composite composite = AlphaComposite.SrcOver;
     private Color background = Color.WHITE;
     private final RenderingHints hints;
+    /**
+     * Whether paint, stroke and font were set through this graphics: only then does its target hold the same value,
+     * so a call setting it again can be left out.
+     */
+    private boolean paintSet;
+    private boolean strokeSet;
+    private boolean fontSet;
+    private final java.util.Set<Object> hintsSet = new java.util.HashSet<>();
+    private static final Class<?> STANDARD_KEY = RenderingHints.KEY_ANTIALIASING.getClass();
+
+    private final boolean mergeLines;
 
     /** A recorder for a drawing area of {@code width} x {@code height} (kept in the picture; not a clip). */
     public RecordingGraphics(double width, double height) {
+        this(width, height, false);
+    }
+
+    /**
+     * A recorder that, when {@code mergeLines}, records straight lines drawn one after another with no other call
+     * in between (so with the same paint, stroke, transform and clip: grid lines, tick marks) as one path of
+     * separate segments: one element in SVG and one stroke in PDF instead of one per line. The pixels differ only
+     * where such lines cross or overlap under antialiasing or translucent paint (drawn once instead of twice).
+     */
+    public RecordingGraphics(double width, double height, boolean mergeLines) {
         this.tape = new Tape();
         this.target = 0;
         this.width = width;
         this.height = height;
         this.geometry = new ClipState();
         this.hints = new RenderingHints(null);
+        this.mergeLines = mergeLines;
     }
 
     private RecordingGraphics(RecordingGraphics parent, int target) {
@@ -93,6 +125,12 @@ public final class RecordingGraphics extends Graphics2D {
         this.composite = parent.composite;
         this.background = parent.background;
         this.hints = (RenderingHints) parent.hints.clone();
+        this.mergeLines = parent.mergeLines;
+        // the created target starts with the state of the parent's target
+        this.paintSet = parent.paintSet;
+        this.strokeSet = parent.strokeSet;
+        this.fontSet = parent.fontSet;
+        this.hintsSet.addAll(parent.hintsSet);
     }
 
     /** The drawing recorded so far (by this recorder and every graphics it created). */
@@ -100,22 +138,73 @@ public final class RecordingGraphics extends Graphics2D {
         return new Picture(width, height, tape.ops, tape.targets, tape.plain);
     }
 
+    /** Records a drawing call. */
     private void rec(Consumer<Graphics2D> call) {
         tape.ops.add(new Picture.Op(target, call));
+        tape.draws++;
     }
 
-    /** Records {@code call}, which makes the picture not {@linkplain Picture#plain() plain}. */
+    /** Records a drawing call that makes the picture not {@linkplain Picture#plain() plain}. */
     private void recOther(Consumer<Graphics2D> call) {
         tape.plain = false;
         rec(call);
+    }
+
+    /** Records a state call (paint, stroke, font, hints, transform, clip). */
+    private void recState(Consumer<Graphics2D> call) {
+        tape.ops.add(new Picture.Op(target, call));
+    }
+
+    /** Records a state call that makes the picture not {@linkplain Picture#plain() plain}. */
+    private void recOtherState(Consumer<Graphics2D> call) {
+        tape.plain = false;
+        recState(call);
     }
 
     // ---- drawing
 
     @Override
     public void draw(Shape s) {
+        if (mergeLines && s instanceof Line2D l) {
+            drawLine(l);
+            return;
+        }
         Shape c = Shapes.copy(s);
         rec(g -> g.draw(c));
+    }
+
+    /**
+     * A line joins the open path of lines when nothing was drawn since that path and everything a line's look
+     * depends on (paint, stroke, composite, hints, transform, clip) is as it was then; state calls recorded in
+     * between are kept (they leave the state as it was, so replaying them after the path changes nothing).
+     */
+    private void drawLine(Line2D l) {
+        Object[] state = {paint, stroke, composite, hints, geometry.transform(), geometry.deviceClip()};
+        if (tape.lines != null && tape.linesBy == this && tape.linesDraws == tape.draws
+                && sameState(tape.linesState, state)) {
+            tape.lines.moveTo(l.getX1(), l.getY1());
+            tape.lines.lineTo(l.getX2(), l.getY2());
+            return;
+        }
+        Path2D.Double path = new Path2D.Double(Path2D.WIND_NON_ZERO, 8);
+        path.moveTo(l.getX1(), l.getY1());
+        path.lineTo(l.getX2(), l.getY2());
+        rec(g -> g.draw(path));
+        tape.lines = path;
+        tape.linesBy = this;
+        tape.linesDraws = tape.draws;
+        tape.linesState = new Object[] {paint, stroke, composite, hints.clone(), new AffineTransform(
+                geometry.transform()), geometry.deviceClip()};
+    }
+
+    private static boolean sameState(Object[] then, Object[] now) {
+        for (int i = 0; i < then.length - 1; i++) {
+            if (!then[i].equals(now[i])) {
+                return false;
+            }
+        }
+        // the clip object changes whenever the clip is set (ClipState), so identity is enough
+        return then[then.length - 1] == now[now.length - 1];
     }
 
     @Override
@@ -295,15 +384,16 @@ public final class RecordingGraphics extends Graphics2D {
 
     @Override
     public void setPaint(Paint p) {
-        if (p == null) {
+        if (p == null || (paintSet && p.equals(paint))) {
             return;
         }
+        paintSet = true;
         paint = p;
         if (p instanceof Color c) {
             color = c;
-            rec(g -> g.setPaint(p));
+            recState(g -> g.setPaint(p));
         } else {
-            recOther(g -> g.setPaint(p));
+            recOtherState(g -> g.setPaint(p));
         }
     }
 
@@ -314,12 +404,13 @@ public final class RecordingGraphics extends Graphics2D {
 
     @Override
     public void setColor(Color c) {
-        if (c == null) {
+        if (c == null || (paintSet && c.equals(paint))) {
             return;
         }
+        paintSet = true;
         paint = c;
         color = c;
-        rec(g -> g.setColor(c));
+        recState(g -> g.setColor(c));
     }
 
     @Override
@@ -332,11 +423,15 @@ public final class RecordingGraphics extends Graphics2D {
         if (s == null) {
             throw new IllegalArgumentException("null stroke");
         }
+        if (strokeSet && s.equals(stroke)) {
+            return;
+        }
+        strokeSet = true;
         stroke = s;
         if (s instanceof BasicStroke) {
-            rec(g -> g.setStroke(s));
+            recState(g -> g.setStroke(s));
         } else {
-            recOther(g -> g.setStroke(s));
+            recOtherState(g -> g.setStroke(s));
         }
     }
 
@@ -347,14 +442,15 @@ public final class RecordingGraphics extends Graphics2D {
 
     @Override
     public void setFont(Font f) {
-        if (f == null) {
+        if (f == null || (fontSet && f.equals(font))) {
             return;
         }
+        fontSet = true;
         font = f;
         if (f.isTransformed()) {
-            recOther(g -> g.setFont(f));
+            recOtherState(g -> g.setFont(f));
         } else {
-            rec(g -> g.setFont(f));
+            recState(g -> g.setFont(f));
         }
     }
 
@@ -370,9 +466,9 @@ public final class RecordingGraphics extends Graphics2D {
         }
         composite = c;
         if (c instanceof AlphaComposite a && a.getRule() == AlphaComposite.SRC_OVER) {
-            rec(g -> g.setComposite(c));
+            recState(g -> g.setComposite(c));
         } else {
-            recOther(g -> g.setComposite(c));
+            recOtherState(g -> g.setComposite(c));
         }
     }
 
@@ -384,7 +480,7 @@ public final class RecordingGraphics extends Graphics2D {
     @Override
     public void setBackground(Color c) {
         background = c;
-        rec(g -> g.setBackground(c));
+        recState(g -> g.setBackground(c));
     }
 
     @Override
@@ -394,22 +490,30 @@ public final class RecordingGraphics extends Graphics2D {
 
     @Override
     public void setPaintMode() {
-        recOther(Graphics::setPaintMode);
+        recOtherState(Graphics::setPaintMode);
     }
 
     @Override
     public void setXORMode(Color c) {
-        recOther(g -> g.setXORMode(c));
+        recOtherState(g -> g.setXORMode(c));
     }
 
     @Override
     public void setRenderingHint(RenderingHints.Key key, Object value) {
+        // a standard Java 2D hint set to the value it already has changes nothing; other keys (e.g. JFreeChart's
+        // element markers) may act on every call, so they are always recorded
+        if (value != null && key.getClass() == STANDARD_KEY && hintsSet.contains(key) && value.equals(hints.get(key))) {
+            return;
+        }
+        if (key.getClass() == STANDARD_KEY) {
+            hintsSet.add(key);
+        }
         if (value == null) {
             hints.remove(key);
         } else {
             hints.put(key, value);
         }
-        rec(g -> g.setRenderingHint(key, value));
+        recState(g -> g.setRenderingHint(key, value));
     }
 
     @Override
@@ -421,15 +525,18 @@ public final class RecordingGraphics extends Graphics2D {
     public void setRenderingHints(Map<?, ?> map) {
         hints.clear();
         hints.putAll(map);
+        hintsSet.clear();
+        hintsSet.addAll(map.keySet());
         Map<?, ?> copy = Map.copyOf(map);
-        rec(g -> g.setRenderingHints(copy));
+        recState(g -> g.setRenderingHints(copy));
     }
 
     @Override
     public void addRenderingHints(Map<?, ?> map) {
         hints.putAll(map);
+        hintsSet.addAll(map.keySet());
         Map<?, ?> copy = Map.copyOf(map);
-        rec(g -> g.addRenderingHints(copy));
+        recState(g -> g.addRenderingHints(copy));
     }
 
     @Override
@@ -442,51 +549,51 @@ public final class RecordingGraphics extends Graphics2D {
     @Override
     public void translate(int x, int y) {
         geometry.transform().translate(x, y);
-        rec(g -> g.translate(x, y));
+        recState(g -> g.translate(x, y));
     }
 
     @Override
     public void translate(double x, double y) {
         geometry.transform().translate(x, y);
-        rec(g -> g.translate(x, y));
+        recState(g -> g.translate(x, y));
     }
 
     @Override
     public void rotate(double theta) {
         geometry.transform().rotate(theta);
-        rec(g -> g.rotate(theta));
+        recState(g -> g.rotate(theta));
     }
 
     @Override
     public void rotate(double theta, double x, double y) {
         geometry.transform().rotate(theta, x, y);
-        rec(g -> g.rotate(theta, x, y));
+        recState(g -> g.rotate(theta, x, y));
     }
 
     @Override
     public void scale(double sx, double sy) {
         geometry.transform().scale(sx, sy);
-        rec(g -> g.scale(sx, sy));
+        recState(g -> g.scale(sx, sy));
     }
 
     @Override
     public void shear(double shx, double shy) {
         geometry.transform().shear(shx, shy);
-        rec(g -> g.shear(shx, shy));
+        recState(g -> g.shear(shx, shy));
     }
 
     @Override
     public void transform(AffineTransform t) {
         AffineTransform c = new AffineTransform(t);
         geometry.transform().concatenate(c);
-        rec(g -> g.transform(c));
+        recState(g -> g.transform(c));
     }
 
     @Override
     public void setTransform(AffineTransform t) {
         AffineTransform c = new AffineTransform(t);
         geometry.transform().setTransform(c);
-        rec(g -> g.setTransform(c));
+        recState(g -> g.setTransform(c));
     }
 
     @Override
@@ -500,26 +607,26 @@ public final class RecordingGraphics extends Graphics2D {
     public void clip(Shape s) {
         Shape c = s == null ? null : Shapes.copy(s);
         geometry.clip(c);
-        rec(g -> g.clip(c));
+        recState(g -> g.clip(c));
     }
 
     @Override
     public void clipRect(int x, int y, int w, int h) {
         geometry.clip(new Rectangle(x, y, w, h));
-        rec(g -> g.clipRect(x, y, w, h));
+        recState(g -> g.clipRect(x, y, w, h));
     }
 
     @Override
     public void setClip(int x, int y, int w, int h) {
         geometry.setClip(new Rectangle(x, y, w, h));
-        rec(g -> g.setClip(x, y, w, h));
+        recState(g -> g.setClip(x, y, w, h));
     }
 
     @Override
     public void setClip(Shape s) {
         Shape c = s == null ? null : Shapes.copy(s);
         geometry.setClip(c);
-        rec(g -> g.setClip(c));
+        recState(g -> g.setClip(c));
     }
 
     @Override
@@ -560,6 +667,7 @@ public final class RecordingGraphics extends Graphics2D {
     public Graphics create() {
         int child = tape.targets++;
         tape.plain = false;
+        tape.draws++;
         tape.ops.add(new Picture.Op(target, new Picture.Create(child)));
         return new RecordingGraphics(this, child);
     }
