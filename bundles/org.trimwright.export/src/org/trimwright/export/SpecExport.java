@@ -91,7 +91,7 @@ public final class SpecExport {
         // one thread per document, and one that runs the validation and then starts the documents (the problem
         // overview comes early in them), while this thread writes the formats that need no validation
         ExecutorService docThreads = Executors.newFixedThreadPool(docSteps + 1, r -> {
-            Thread t = new Thread(r, "trimwright-export-document");
+            Thread t = new Thread(r, "export-document");
             t.setDaemon(true);
             return t;
         });

@@ -41,7 +41,7 @@ public final class SharedSections implements AutoCloseable {
         this.window = window;
         this.position = new long[readers];
         this.gone = new boolean[readers];
-        this.producer = new Thread(this::produce, "trimwright-export-sections");
+        this.producer = new Thread(this::produce, "export-sections");
         producer.setDaemon(true);
         producer.start();
     }
