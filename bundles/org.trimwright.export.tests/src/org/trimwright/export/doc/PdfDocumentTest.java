@@ -106,7 +106,7 @@ class PdfDocumentTest {
             Set<String> seen = new HashSet<>();
             for (Section s : sections) {
                 PDPageXYZDestination d = dests.get(s.id());
-                assertNotNull(d, "destination " + s.id());
+                assertNotNull(d, "destination " + s.id()); // PDFBox: the catalog's name tree of destinations
                 if (!seen.add(s.id())) {
                     // FieldSections gives a field's step table in its chapter and in the appendix the same anchor:
                     // the first heading holds the name
@@ -116,10 +116,12 @@ class PdfDocumentTest {
                 PDFTextStripper strip = new PDFTextStripper();
                 strip.setStartPage(page + 1);
                 strip.setEndPage(page + 1);
+                // PDFBox: the page the destination points at, and its text
                 assertTrue(strip.getText(pdf).contains(s.title()), s.title() + " on the page of " + s.id());
                 assertEquals(PdfPages.LEFT, d.getLeft(), 0.01, "destination at the text's left edge");
             }
-            // OpenPDF's links go to the destination object the name stands for: find the name by its place
+            // PDFBox: the link annotations of every page; OpenPDF's links go to the destination object the name
+            // stands for: find the name by its place
             Map<String, String> byPlace = new HashMap<>();
             dests.forEach((name, d) -> byPlace.put(place(pdf, d), name));
             Set<String> linked = new HashSet<>();
@@ -135,6 +137,7 @@ class PdfDocumentTest {
                         assertTrue(id != null && dests.containsKey(id), "link to an existing destination: " + id);
                         String title = plan.contents().stream().filter(e -> e.id().equals(id)).findFirst()
                                 .orElseThrow(() -> new AssertionError("link " + id + " is no contents entry")).title();
+                        // PDFBox's area stripper: the text under the link's rectangle
                         assertEquals(title, textIn(pdf, i, link.getRectangle()), "link over its entry's text");
                         linked.add(id);
                     }
@@ -145,7 +148,7 @@ class PdfDocumentTest {
     }
 
     @Test
-    void headingsReadInOrderAndChaptersStartOnANewPage() throws IOException {
+    void headingsReadInOrderWithWhatFollowsAndChaptersStartOnANewPage() throws IOException {
         try (PDDocument pdf = Loader.loadPDF(demo)) {
             // each page's text in reading order; the headings after the contents, in order, each on its own line
             List<List<String>> pages = new ArrayList<>();
@@ -169,19 +172,59 @@ class PdfDocumentTest {
                 }
                 assertTrue(page < pages.size(), "heading in reading order: " + s.title());
                 line += pages.get(page).subList(line, pages.get(page).size()).indexOf(s.title()) + 1;
+                assertTrue(line < pages.get(page).size(), s.title() + " not alone at the foot of its page");
                 if (s.level() == 1 || (s.level() == 2 && !afterChapterHead)) {
                     assertTrue(page > previous || s == sections.get(0), s.title() + " on a new page");
-                    assertEquals(1, line, s.title() + " first on its page");
+                    assertEquals(1, line, s.title() + " first on its page"); // PDFBox, page text in reading order
                 }
                 afterChapterHead = s.level() == 1 && s.parts().size() <= 1;
             }
         }
     }
 
+    /** Pages filled to many depths, each followed by a heading: the heading is never the last line of a page. */
+    @Test
+    void aHeadingStaysWithTheFirstLineAfterIt() throws Exception {
+        List<Section> content = new ArrayList<>();
+        for (int k = 34; k <= 41; k++) {
+            for (int m = 0; m <= 4; m++) {
+                Section.Builder filler = new Section.Builder("s-fill-" + k + "-" + m, "Filler " + k + " " + m, 2);
+                for (int i = 0; i < k; i++) {
+                    filler.para("one line " + i);
+                }
+                if (m > 0) {
+                    filler.para(("lines of text " + m + " ").repeat(10 * m).strip());
+                }
+                content.add(filler.build());
+                content.add(new Section.Builder("s-kept-" + k + "-" + m, "Kept heading " + k + " " + m, 3)
+                        .para("Following text " + k + " " + m).build());
+            }
+        }
+        try (PDDocument pdf = Loader.loadPDF(write(content))) {
+            PDFTextStripper strip = new PDFTextStripper();
+            strip.setSortByPosition(true);
+            int kept = 0;
+            for (int p = 1; p <= pdf.getNumberOfPages(); p++) {
+                strip.setStartPage(p);
+                strip.setEndPage(p);
+                List<String> lines = strip.getText(pdf).lines().toList(); // PDFBox, reading order
+                for (int i = 0; i < lines.size(); i++) {
+                    if (lines.get(i).startsWith("Kept heading ")) {
+                        String which = lines.get(i).substring("Kept heading ".length());
+                        assertTrue(i + 1 < lines.size() && lines.get(i + 1).equals("Following text " + which),
+                                lines.get(i) + " followed by its text on page " + p);
+                        kept++;
+                    }
+                }
+            }
+            assertEquals(40, kept, "every heading found");
+        }
+    }
+
     @Test
     void textAndChartsStayInsideTheMarginsAndChartsAreCentred() throws IOException {
         try (PDDocument pdf = Loader.loadPDF(demo)) {
-            PdfPages.Content c = PdfPages.read(pdf);
+            PdfPages.Content c = PdfPages.read(pdf); // PDFBox: glyph positions and form XObject boxes
             PdfPages.assertInsideMargins(c);
             long charts = sections.stream().flatMap(s -> s.parts().stream()).filter(p -> p instanceof Part.Chart)
                     .count();
@@ -219,6 +262,7 @@ class PdfDocumentTest {
             while (m.find()) {
                 (m.group(1).equals("p") ? p : c).add(Integer.parseInt(m.group(2)));
             }
+            // PDFBox's text in reading order
             assertEquals(IntStream.range(0, n).boxed().toList(), p, "every word of the paragraph once, in order");
             assertEquals(IntStream.range(0, n).boxed().toList(), c, "every word of the caution once, in order");
             assertTrue(text.indexOf("Caution. c0") > text.indexOf("p" + (n - 1)), "the box follows the paragraph");

@@ -185,6 +185,7 @@ class PdfTextTest {
         int compared = 0;
         for (long seed = 1; seed <= 10; seed++) {
             List<El> els = elements(seed, 120);
+            // the reference: OpenPDF's Document layout of the same elements; both files read back by PDFBox
             try (PDDocument ref = Loader.loadPDF(openPdf(els)); PDDocument got = Loader.loadPDF(flow(els))) {
                 PdfPages.Content a = PdfPages.read(ref);
                 PdfPages.Content b = PdfPages.read(got);
@@ -228,7 +229,7 @@ class PdfTextTest {
         List<El> els = List.of(new Para("before", 9.5f, 0, 0, 4), new Chart(picture(507, 244)),
                 new Chart(picture(300, 151)));
         try (PDDocument pdf = Loader.loadPDF(flow(els))) {
-            PdfPages.Content c = PdfPages.read(pdf);
+            PdfPages.Content c = PdfPages.read(pdf); // PDFBox: the forms' boxes on the page
             PdfPages.assertInsideMargins(c);
             assertEquals(2, c.forms().size());
             for (PdfPages.Form f : c.forms()) {
