@@ -20,7 +20,6 @@ import org.junit.jupiter.api.Timeout;
 
 import com.lowagie.text.Document;
 import com.lowagie.text.PageSize;
-import com.lowagie.text.Paragraph;
 import com.lowagie.text.pdf.PdfWriter;
 
 class PdfRowTableTest {
@@ -38,20 +37,11 @@ class PdfRowTableTest {
     /** Read back with PDFBox (an independent PDF reader): every row in order, the header on every page. */
     @Test
     void longTableKeepsEveryRowInOrderWithTheHeaderOnEveryPage() throws Exception {
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        Document doc = new Document(PageSize.A4, 40, 40, 48, 48);
-        PdfWriter writer = PdfWriter.getInstance(doc, out);
-        doc.open();
-        PdfRowTable t = new PdfRowTable(doc, writer, new PdfFonts().base(), java.awt.Color.BLUE);
-        doc.add(new Paragraph("BEFORE"));
-        PdfRowTable.Style style = PdfRowTable.data(3);
-        t.write(style, HEADER, rows(300), 6);
-        doc.add(new Paragraph("AFTER"));
-        doc.close();
-        try (PDDocument pdf = Loader.loadPDF(out.toByteArray())) {
+        byte[] bytes = pdf((t, flow) -> flow.endTable(t.write(PdfRowTable.data(3), HEADER, rows(300)), 6));
+        try (PDDocument pdf = Loader.loadPDF(bytes)) {
             assertTrue(pdf.getNumberOfPages() >= 5, "300 rows of ~15 pt need several pages");
             PDFTextStripper strip = new PDFTextStripper();
-            strip.setSortByPosition(true); // reading order: document text and direct content are separate streams
+            strip.setSortByPosition(true); // reading order: a row is drawn cell by cell, each cell line by line
             String all = strip.getText(pdf);
             int at = all.indexOf("BEFORE");
             for (int i = 0; i < 300; i++) {
@@ -72,22 +62,26 @@ class PdfRowTableTest {
         }
     }
 
-    /** A document with {@code body} between two paragraphs, BEFORE and AFTER; returns the PDF. */
-    private static byte[] pdf(TableBody body) throws Exception {
+    /** A document with {@code body} between two paragraphs, BEFORE and AFTER, drawn at a page flow; the PDF. */
+    static byte[] pdf(TableBody body) throws Exception {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         Document doc = new Document(PageSize.A4, 40, 40, 48, 48);
         PdfWriter writer = PdfWriter.getInstance(doc, out);
         doc.open();
-        PdfRowTable t = new PdfRowTable(doc, writer, new PdfFonts().base(), java.awt.Color.BLUE);
-        doc.add(new Paragraph("BEFORE"));
-        body.write(t);
-        doc.add(new Paragraph("AFTER"));
+        PageFlow flow = new PageFlow(doc);
+        GlyphWidths glyphs = new GlyphWidths(new PdfFonts().base());
+        PdfText text = new PdfText(writer.getDirectContent(), glyphs);
+        PdfRowTable t = new PdfRowTable(flow, writer.getDirectContent(), glyphs, java.awt.Color.BLUE);
+        PdfText.Style style = new PdfText.Style(12, java.awt.Color.BLACK, 0, 0, 0);
+        text.paragraph(flow, List.of("BEFORE"), style, null);
+        body.write(t, flow);
+        text.paragraph(flow, List.of("AFTER"), style, null);
         doc.close();
         return out.toByteArray();
     }
 
-    private interface TableBody {
-        void write(PdfRowTable t) throws Exception;
+    interface TableBody {
+        void write(PdfRowTable t, PageFlow flow) throws Exception;
     }
 
     private static String words(String prefix, int n) {
@@ -162,9 +156,10 @@ class PdfRowTableTest {
         List<String> kv = List.of("Method", "counted from the synthesised gate netlist (structural decoder: shared "
                 + "predecoding / recursive thermometer / Gray XOR chain; De Morgan mapping to INV/NAND/NOR) "
                 + words("more", 40));
-        byte[] bytes = pdf(t -> {
-            t.write(PdfRowTable.data(3), HEADER, rows, 6);
-            t.write(PdfRowTable.keyValues(java.awt.Color.GRAY), null, List.of(kv, List.of("Gates", "4 INV")), 4);
+        byte[] bytes = pdf((t, flow) -> {
+            flow.endTable(t.write(PdfRowTable.data(3), HEADER, rows), 6);
+            flow.endTable(t.write(PdfRowTable.keyValues(java.awt.Color.GRAY), null,
+                    List.of(kv, List.of("Gates", "4 INV"))), 4);
         });
         try (PDDocument pdf = Loader.loadPDF(bytes)) {
             String all = squeeze(new PDFTextStripper().getText(pdf)); // content order: cell by cell
@@ -196,7 +191,7 @@ class PdfRowTableTest {
             String note = "start-" + i + " " + words("w", 5 + i % 50) + " end-" + i;
             rows.add(List.of(Integer.toString(i), "bits " + i, note));
         }
-        byte[] bytes = pdf(t -> t.write(PdfRowTable.data(3), HEADER, rows, 6));
+        byte[] bytes = pdf((t, flow) -> flow.endTable(t.write(PdfRowTable.data(3), HEADER, rows), 6));
         try (PDDocument pdf = Loader.loadPDF(bytes)) {
             assertTrue(pdf.getNumberOfPages() >= 8, "150 rows of 1 to 10 lines need many pages");
             PDFTextStripper strip = new PDFTextStripper();
@@ -235,7 +230,7 @@ class PdfRowTableTest {
         String lines = words("line", 200).replace(' ', '\n');
         List<List<String>> rows = List.of(List.of("0", "short", "x"), List.of("1", lines, tall),
                 List.of("2", "after", "y"));
-        byte[] bytes = pdf(t -> t.write(PdfRowTable.data(3), HEADER, rows, 6));
+        byte[] bytes = pdf((t, flow) -> flow.endTable(t.write(PdfRowTable.data(3), HEADER, rows), 6));
         try (PDDocument pdf = Loader.loadPDF(bytes)) {
             assertTrue(pdf.getNumberOfPages() >= 4, "3,000 words in a third of the width take several pages");
             PDFTextStripper strip = new PDFTextStripper();

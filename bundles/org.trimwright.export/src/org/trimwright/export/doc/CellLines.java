@@ -6,20 +6,25 @@ import java.util.List;
 import com.lowagie.text.pdf.BaseFont;
 
 /**
- * Breaks a table cell's text into lines no wider than its column, measured with the font's advance widths (those of
- * {@link BaseFont#getWidthPoint}, through {@link GlyphWidths}): a new line at every {@code '\n'}, otherwise as many
- * words as fit; breaks at spaces (dropped at the break) and after a hyphen between two letters (kept at the end of
- * the line), as {@code PdfPTable} broke its cells; a word wider than the column on its own is broken between
- * characters. Every character except the spaces at a break is on exactly one line, in order.
+ * Breaks text into lines no wider than its column (a table cell, a paragraph, a box), measured with the font's
+ * advance widths (those of {@link BaseFont#getWidthPoint}, through {@link GlyphWidths}): a new line at every
+ * {@code '\n'}, otherwise as many words as fit; breaks at spaces (dropped at the break) and after a hyphen between two
+ * letters (kept at the end of the line), as OpenPDF broke its paragraphs and table cells; a word wider than the
+ * column on its own is broken between characters. Every character except the spaces at a break is on exactly one
+ * line, in order.
  */
 final class CellLines {
+
+    /** Larger than the rounding error of a line's width in float (a few ulps of ~500 per character). */
+    private static final float ROUNDING = 0.01f;
 
     private CellLines() {
     }
 
     /** The lines of {@code text} in {@code size}-point type for a column {@code width} points wide. */
     static List<String> wrap(GlyphWidths font, float size, String text, float width) {
-        if (text.indexOf('\n') < 0 && font.points(text, 0, text.length(), size) <= width) {
+        if (text.indexOf('\n') < 0 && fits(font, size, text, 0, text.length(), font.points(text, 0,
+                text.length(), size), width)) {
             return List.of(text);
         }
         List<String> lines = new ArrayList<>();
@@ -58,13 +63,21 @@ final class CellLines {
         while (at < p.length()) {
             int end = wordEnd(p, at);
             used += font.points(p, at, end, size);
-            if (used > width) {
+            if (!fits(font, size, p, start, end, used, width)) {
                 break;
             }
             best = end;
             at = end;
         }
         return best > start ? best : characters(font, size, p, start, width);
+    }
+
+    /**
+     * Whether {@code p} from {@code from} to {@code to}, {@code used} points wide, fits {@code width}; a line within
+     * rounding of the width is decided by OpenPDF's own sum of the character widths.
+     */
+    private static boolean fits(GlyphWidths font, float size, String p, int from, int to, float used, float width) {
+        return used <= width - ROUNDING || (used <= width + ROUNDING && font.summed(p, from, to, size) <= width);
     }
 
     /** End of the word at {@code at} (with the spaces before it): at a space, or just after a hyphen in a word. */

@@ -41,4 +41,26 @@ final class GlyphWidths {
         }
         return total * 0.001f * size;
     }
+
+    /**
+     * Width in points of {@code s} from {@code from} to {@code to} as OpenPDF's line breaking adds it up: the float
+     * width of each character ({@code BaseFont.getWidthPoint(int, float)}) summed in float. Differs from
+     * {@link #points} by rounding only, which decides a line that fills its width exactly.
+     */
+    float summed(String s, int from, int to, float size) {
+        float total = 0;
+        for (int i = from; i < to; i++) {
+            char c = s.charAt(i);
+            int units;
+            if (Character.isHighSurrogate(c) && i + 1 < to && Character.isLowSurrogate(s.charAt(i + 1))) {
+                units = font.getWidth(s.codePointAt(i));
+                i++;
+            } else {
+                points(s, i, i + 1, size);
+                units = widths[c] - 1;
+            }
+            total += units * 0.001f * size;
+        }
+        return total;
+    }
 }

@@ -1,55 +1,47 @@
 package org.trimwright.export.doc;
 
 import java.awt.Color;
-import java.awt.Graphics2D;
 import java.io.OutputStream;
 import java.util.List;
 import java.util.zip.Deflater;
 
-import org.trimwright.export.picture.Picture;
-
-import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.Element;
 import com.lowagie.text.Font;
-import com.lowagie.text.Image;
 import com.lowagie.text.PageSize;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.Phrase;
 import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
-import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfWriter;
 
 /**
- * Writes the document as PDF with OpenPDF: title page, contents, then the same sections as the HTML file. Charts are
- * drawn through OpenPDF's Graphics2D into form XObjects, so they stay vector graphics with text as text. Every field
- * chapter starts on a new page.
+ * Writes the document as PDF with OpenPDF: title page, contents, then the same sections as the HTML file. After the
+ * title page everything is drawn as page content at a position of our own ({@link PageFlow}); the document only
+ * starts pages. Headings are named destinations, contents entries link to them. Charts are drawn through OpenPDF's
+ * Graphics2D into form XObjects ({@link PdfChart}), so they stay vector graphics with text as text. Every field
+ * chapter starts on a new page; a heading stays on the page of the first line of what follows it.
  */
 public final class PdfDocument {
 
-    /** Chart size in the PDF, points. */
-    static final float CHART_W = 515;
-    static final float CHART_H = 258;
-
     private static final Color INK = new Color(0x1F, 0x4E, 0x79);
     private static final Color COPPER = new Color(0xC0, 0x6A, 0x2B);
-    private static final Color MUTED = new Color(0x6B, 0x76, 0x80);
-    private static final Color PLUM = new Color(0x8E, 0x3B, 0x6F);
+    private static final PdfText.Style CONTENTS = new PdfText.Style(17f, INK, 0, 0, 0);
+    private static final PdfText.Style ENTRY = new PdfText.Style(PdfParts.BODY, Color.BLACK, 0, 0, 0);
+    private static final PdfText.Style SUB_ENTRY = new PdfText.Style(8f, Color.BLACK, 14, 0, 0);
+    private static final PdfText.Style H1 = new PdfText.Style(17f, INK, 0, 0, 4);
+    private static final PdfText.Style H2 = new PdfText.Style(14f, INK, 0, 0, 4);
+    private static final PdfText.Style H3 = new PdfText.Style(10.5f, COPPER, 0, 10, 4);
 
     private final Document doc;
     private final PdfWriter writer;
     private final PdfFonts fonts = new PdfFonts();
-    private final Font body;
-    private final Font small;
-    private final Font caption;
-    private final Font h1;
-    private final Font h2;
-    private final Font h3;
-    private final PdfRowTable rowTable;
-    private final PdfChartCanvas.Shared chartResources;
+    private final PageFlow flow;
+    /** Set when the document is open (page content exists from then on). */
+    private PdfText text;
+    private PdfParts parts;
 
     private PdfDocument(OutputStream out) throws DocumentException {
         doc = new Document(PageSize.A4, 40, 40, 48, 48);
@@ -58,15 +50,15 @@ public final class PdfDocument {
         // zlib's fastest level: compressing thousands of pages and charts at the default level cost a fifth of the
         // PDF writer's time, for a file about a tenth smaller
         writer.setCompressionLevel(Deflater.BEST_SPEED);
-        writer.setStrictImageSequence(true);
-        body = new Font(fonts.base(), 9.5f);
-        small = new Font(fonts.base(), 8f);
-        caption = new Font(fonts.base(), 8f, Font.NORMAL, MUTED);
-        h1 = new Font(fonts.base(), 17f, Font.NORMAL, INK);
-        h2 = new Font(fonts.base(), 14f, Font.NORMAL, INK);
-        h3 = new Font(fonts.base(), 10.5f, Font.NORMAL, COPPER);
-        rowTable = new PdfRowTable(doc, writer, fonts.base(), INK);
-        chartResources = new PdfChartCanvas.Shared(fonts.base());
+        flow = new PageFlow(doc);
+    }
+
+    private void open() {
+        doc.open();
+        PdfContentByte cb = writer.getDirectContent();
+        GlyphWidths glyphs = new GlyphWidths(fonts.base());
+        text = new PdfText(cb, glyphs);
+        parts = new PdfParts(flow, text, new PdfRowTable(flow, cb, glyphs, INK), new PdfChart(writer, fonts));
     }
 
     /** Writes the whole document; {@code onSection} is told after each section (for progress). */
@@ -89,14 +81,13 @@ public final class PdfDocument {
         doc.addTitle(t.chip() + " " + t.revision() + " control specification");
         doc.addAuthor(t.author());
         doc.addCreator("Trimwright");
-        doc.open();
+        open();
         titlePage(plan);
         doc.newPage();
-        doc.add(new Paragraph("Contents", h1));
+        text.paragraph(flow, text.lines(flow, "Contents", CONTENTS), CONTENTS, null);
         for (DocumentPlan.Entry e : plan.contents()) {
-            Paragraph p = new Paragraph(new Chunk(e.title(), e.level() == 1 ? body : small).setLocalGoto(e.id()));
-            p.setIndentationLeft(e.level() == 1 ? 0 : 14);
-            doc.add(p);
+            PdfText.Style style = e.level() == 1 ? ENTRY : SUB_ENTRY;
+            text.paragraph(flow, text.lines(flow, e.title(), style), style, e.id());
         }
         for (Section s : sections) {
             section(s);
@@ -114,6 +105,7 @@ public final class PdfDocument {
         Paragraph chip = new Paragraph(t.chip(), new Font(fonts.base(), 30f, Font.NORMAL, INK));
         chip.setSpacingAfter(10);
         doc.add(chip);
+        Font body = new Font(fonts.base(), PdfParts.BODY);
         doc.add(new Paragraph(t.description(), body));
         PdfPTable kv = new PdfPTable(new float[] {1, 4});
         kv.setWidthPercentage(70);
@@ -121,103 +113,49 @@ public final class PdfDocument {
         kv.setSpacingBefore(30);
         String[][] rows = {{"Chip", t.chip()}, {"Revision", t.revision()}, {"Date", t.date()},
             {"Author", t.author()}, {"Fields", Integer.toString(plan.digest().fields().size())}};
+        Font caption = new Font(fonts.base(), 8f, Font.NORMAL, PdfParts.MUTED);
         for (String[] r : rows) {
-            kv.addCell(cell(r[0], caption, false));
-            kv.addCell(cell(r[1], body, false));
+            kv.addCell(cell(r[0], caption));
+            kv.addCell(cell(r[1], body));
         }
         doc.add(kv);
+    }
+
+    private static PdfPCell cell(String text, Font f) {
+        PdfPCell c = new PdfPCell(new Phrase(text, f));
+        c.setBorder(PdfPCell.BOTTOM);
+        c.setBorderColor(new Color(0xDD, 0xE2, 0xE7));
+        c.setPadding(2.5f);
+        return c;
     }
 
     private boolean afterChapterHead;
 
     private void section(Section s) throws DocumentException {
         if (s.level() == 1 || (s.level() == 2 && !afterChapterHead)) {
-            doc.newPage();
+            flow.newPage();
         }
         afterChapterHead = s.level() == 1 && s.parts().size() <= 1;
-        Font f = s.level() == 1 ? h1 : s.level() == 2 ? h2 : h3;
-        Paragraph head = new Paragraph(new Chunk(s.title(), f).setLocalDestination(s.id()));
-        head.setSpacingBefore(s.level() == 3 ? 10 : 0);
-        head.setSpacingAfter(4);
-        // a one-line heading cannot split anyway; OpenPDF keeps a paragraph together by wrapping it in a table,
-        // which costs as much as the table cells, so only headings that wrap ask for it
-        head.setKeepTogether(fonts.base().getWidthPoint(s.title(), f.getSize()) > doc.right() - doc.left());
-        doc.add(head);
-        for (Part p : s.parts()) {
-            part(p);
+        PdfText.Style style = s.level() == 1 ? H1 : s.level() == 2 ? H2 : H3;
+        List<String> title = text.lines(flow, s.title(), style);
+        List<Part> content = s.parts();
+        PdfParts.Block first = content.isEmpty() ? null : parts.block(content.get(0));
+        if (first != null && !flow.blank() && !together(title, style, first, flow.trial())) {
+            // the heading would be alone at the foot of the page: start the page with it, if that keeps them together
+            PageFlow fresh = flow.trial();
+            fresh.newPage();
+            if (together(title, style, first, fresh)) {
+                flow.newPage();
+            }
+        }
+        text.heading(flow, title, style, s.id());
+        for (int i = 0; i < content.size(); i++) {
+            (i == 0 ? first : parts.block(content.get(i))).place();
         }
     }
 
-    private void part(Part p) throws DocumentException {
-        if (p instanceof Part.Para para) {
-            Paragraph x = new Paragraph(para.text(), body);
-            x.setSpacingAfter(4);
-            doc.add(x);
-        } else if (p instanceof Part.Caution c) {
-            PdfPTable box = new PdfPTable(1);
-            box.setWidthPercentage(100);
-            PdfPCell cell = new PdfPCell(new Phrase("Caution. " + c.text(), body));
-            cell.setBorder(PdfPCell.LEFT);
-            cell.setBorderWidthLeft(3);
-            cell.setBorderColorLeft(PLUM);
-            cell.setBackgroundColor(new Color(0xF8, 0xEE, 0xF4));
-            cell.setPadding(5);
-            box.addCell(cell);
-            box.setSpacingBefore(4);
-            box.setSpacingAfter(4);
-            doc.add(box);
-        } else if (p instanceof Part.KeyValues kv) {
-            rowTable.write(KEY_VALUES, null, rows(kv), 4);
-        } else if (p instanceof Part.Table tab) {
-            table(tab);
-        } else if (p instanceof Part.Chart c) {
-            chart(c.figure().drawn().picture(), c.figure().caption(c.caption()));
-        }
-    }
-
-    private static final PdfRowTable.Style KEY_VALUES = PdfRowTable.keyValues(MUTED);
-
-    private static List<List<String>> rows(Part.KeyValues kv) {
-        return kv.rows().stream().map(java.util.Arrays::asList).toList();
-    }
-
-    private void table(Part.Table tab) throws DocumentException {
-        Paragraph cap = new Paragraph(tab.caption(), caption);
-        doc.add(cap);
-        rowTable.write(PdfRowTable.data(tab.header().size()), tab.header(), tab.rows(), 6);
-    }
-
-    private PdfPCell cell(String text, Font f, boolean shaded) {
-        PdfPCell c = new PdfPCell(new Phrase(text, f));
-        c.setBorder(PdfPCell.BOTTOM);
-        c.setBorderColor(new Color(0xDD, 0xE2, 0xE7));
-        c.setPadding(2.5f);
-        if (shaded) {
-            c.setBackgroundColor(new Color(0xFA, 0xFB, 0xFA));
-        }
-        return c;
-    }
-
-    private void chart(Picture picture, String title) throws DocumentException {
-        PdfContentByte cb = writer.getDirectContent();
-        float w = (float) picture.width();
-        float h = (float) picture.height();
-        PdfTemplate tp = cb.createTemplate(w, h);
-        Graphics2D g = picture.plain() ? new PdfChartCanvas(tp, h, chartResources)
-                : tp.createGraphics(w, h, fonts);
-        picture.paint(g);
-        g.dispose();
-        Image img = Image.getInstance(tp);
-        img.scaleToFit(CHART_W, CHART_H);
-        img.setAlignment(Image.MIDDLE);
-        doc.add(img);
-        try {
-            // write the chart's form XObject now and drop its content: otherwise every chart of the document stays
-            // in memory until close (memory would grow with the number of fields)
-            writer.releaseTemplate(tp);
-        } catch (java.io.IOException e) {
-            throw new DocumentException(e);
-        }
-        doc.add(new Paragraph(title, caption));
+    /** Whether on {@code trial} the heading's last line and the first line of {@code first} fall on one page. */
+    private boolean together(List<String> title, PdfText.Style style, PdfParts.Block first, PageFlow trial) {
+        return text.heading(trial, title, style, null) == first.start(trial);
     }
 }

@@ -4,22 +4,18 @@ import java.awt.Color;
 import java.util.ArrayList;
 import java.util.List;
 
-import com.lowagie.text.Document;
-import com.lowagie.text.DocumentException;
 import com.lowagie.text.pdf.BaseFont;
 import com.lowagie.text.pdf.PdfContentByte;
-import com.lowagie.text.pdf.PdfPCell;
-import com.lowagie.text.pdf.PdfPTable;
-import com.lowagie.text.pdf.PdfWriter;
 
 /**
  * Writes a table directly as page content, with the look of the {@code PdfPTable} it replaces: columns over the text
  * width, a rule under each row, and for data tables a shaded header row repeated on every page and shaded alternate
  * rows; for label/value rows a muted label column. Cell text wraps onto as many lines as it needs
  * ({@link CellLines}); a row is as tall as its tallest cell and moves to the next page when it does not fit, or, when
- * it is taller than a page, splits between lines ({@link RowLines}). OpenPDF's {@code PdfPTable} lays out every cell
- * through its own column layout, twice (height, then drawing); for the tables and key figures of a large spec that
- * was a fifth of the export.
+ * it is taller than a page, splits between lines ({@link RowLines}). The table starts at the position of a
+ * {@link PageFlow} and new pages come from it; the caller moves the flow below the table. OpenPDF's {@code PdfPTable}
+ * lays out every cell through its own column layout, twice (height, then drawing); for the tables and key figures of
+ * a large spec that was a fifth of the export.
  */
 final class PdfRowTable {
 
@@ -34,17 +30,17 @@ final class PdfRowTable {
     record Style(float[] widths, float[] sizes, Color[] inks, boolean banded) {
     }
 
-    private final Document doc;
-    private final PdfWriter writer;
+    private final PageFlow flow;
+    private final PdfContentByte cb;
     private final BaseFont font;
     private final GlyphWidths glyphs;
     private final Color headInk;
 
-    PdfRowTable(Document doc, PdfWriter writer, BaseFont font, Color headInk) {
-        this.doc = doc;
-        this.writer = writer;
-        this.font = font;
-        this.glyphs = new GlyphWidths(font);
+    PdfRowTable(PageFlow flow, PdfContentByte cb, GlyphWidths glyphs, Color headInk) {
+        this.flow = flow;
+        this.cb = cb;
+        this.font = glyphs.font();
+        this.glyphs = glyphs;
         this.headInk = headInk;
     }
 
@@ -70,8 +66,8 @@ final class PdfRowTable {
             total += w;
         }
         float[] x = new float[style.widths().length + 1];
-        x[0] = doc.left();
-        float width = doc.right() - doc.left();
+        x[0] = flow.left();
+        float width = flow.right() - flow.left();
         for (int i = 0; i < style.widths().length; i++) {
             x[i + 1] = x[i] + width * style.widths()[i] / total;
         }
@@ -79,48 +75,40 @@ final class PdfRowTable {
     }
 
     /**
-     * Writes the table below the current position, then moves the document's position below it.
+     * Writes the table below the position of the flow, from the next page when its header and first row (without a
+     * header: two rows) do not fit there; returns the position below its last row.
      *
      * @param header header row repeated on each page, or null
      */
-    void write(Style style, List<String> header, List<? extends List<String>> rows, float spacingAfter)
-            throws DocumentException {
+    float write(Style style, List<String> header, List<? extends List<String>> rows) {
         Run run = new Run(style, header);
-        // the position is the last line's baseline: leave room for its descent
-        run.y = writer.getVerticalPosition(true) - 3f;
-        // start on a new page unless the header and a first row (without a header: two rows) fit here
-        float need = run.headHeight;
-        for (int i = 0; i < Math.min(rows.size(), header == null ? 2 : 1); i++) {
-            need += run.lines(style, rows.get(i)).height();
-        }
-        if (run.y - need < doc.bottom() && need <= doc.top() - doc.bottom()) {
-            doc.newPage();
-            run.y = doc.top();
-        }
+        run.y = start(flow, run, style, rows);
         run.header();
         boolean even = false;
         for (List<String> r : rows) {
             run.row(style, run.lines(style, r), style.banded() && even ? SHADE : null);
             even = !even;
         }
-        float y = run.y;
-        // move the document's own position to below the table with an empty, borderless block as tall as the space
-        // used (or a new page when the table ends at the foot of one)
-        if (y - spacingAfter - 2 < doc.bottom()) {
-            doc.newPage();
-            return;
+        return run.y;
+    }
+
+    /** Where the table's first row would start on {@code f} (a {@link PageFlow#trial()}), moving it as it would. */
+    float start(PageFlow f, Style style, List<String> header, List<? extends List<String>> rows) {
+        return start(f, new Run(style, header), style, rows);
+    }
+
+    private float start(PageFlow f, Run run, Style style, List<? extends List<String>> rows) {
+        // the position is the last line's baseline: leave room for its descent
+        float y = f.y() - 3f;
+        float need = run.headHeight;
+        for (int i = 0; i < Math.min(rows.size(), run.head == null ? 2 : 1); i++) {
+            need += run.lines(style, rows.get(i)).height();
         }
-        float advance = writer.getVerticalPosition(true) - y + spacingAfter;
-        if (advance > 0) {
-            PdfPTable spacer = new PdfPTable(1);
-            spacer.setWidthPercentage(100);
-            PdfPCell cell = new PdfPCell();
-            cell.setBorder(PdfPCell.NO_BORDER);
-            cell.setPadding(0);
-            cell.setFixedHeight(advance);
-            spacer.addCell(cell);
-            doc.add(spacer);
+        if (y - need < f.bottom() && need <= f.pageHeight()) {
+            f.newPage();
+            y = f.top();
         }
+        return y;
     }
 
     private static Color[] fill(Style style, Color ink) {
@@ -132,7 +120,6 @@ final class PdfRowTable {
     /** One table being written: its columns, its header, and the position on the page. */
     private final class Run {
 
-        final PdfContentByte cb = writer.getDirectContent();
         final float[] x;
         final float ascent;
         final float base;
@@ -155,7 +142,7 @@ final class PdfRowTable {
             headStyle = header == null ? null : new Style(style.widths(), style.sizes(), fill(style, headInk), false);
             head = header == null ? null : lines(headStyle, header);
             headHeight = head == null ? 0 : head.height();
-            pageTop = doc.top() - headHeight;
+            pageTop = flow.top() - headHeight;
         }
 
         /** The row's cells broken into lines of their columns (missing cells are empty). */
@@ -179,9 +166,8 @@ final class PdfRowTable {
         }
 
         void newPage() {
-            // the page holds direct content, so the document starts a new one
-            doc.newPage();
-            y = doc.top();
+            flow.newPage();
+            y = flow.top();
             header();
             pageTop = y;
         }
@@ -191,11 +177,11 @@ final class PdfRowTable {
          * lines over as many pages as it needs (every part draws at least one line, so this ends).
          */
         void row(Style style, RowLines r, Color fill) {
-            if (r.height() > y - doc.bottom() && y < pageTop && r.height() <= doc.top() - headHeight - doc.bottom()) {
+            if (r.height() > y - flow.bottom() && y < pageTop && r.height() <= flow.pageHeight() - headHeight) {
                 newPage();
             }
-            while (r.height() > y - doc.bottom()) {
-                float space = y - doc.bottom();
+            while (r.height() > y - flow.bottom()) {
+                float space = y - flow.bottom();
                 if (space < base && y < pageTop) {
                     newPage();
                     continue;
@@ -216,6 +202,9 @@ final class PdfRowTable {
             float left = x[0];
             float width = x[x.length - 1] - left;
             float bottom = y - r.height();
+            flow.drawn();
+            // the graphics state is left as found (charts drawn later start from the defaults)
+            cb.saveState();
             if (fill != null) {
                 cb.setColorFill(fill);
                 cb.rectangle(left, bottom, width, y - bottom);
@@ -249,6 +238,7 @@ final class PdfRowTable {
                 }
             }
             cb.endText();
+            cb.restoreState();
             y = bottom;
         }
     }
