@@ -79,6 +79,24 @@ class DemoExportTest {
         assertTrue(html.contains("Caution."), "the demo's LDO select has codes outside its safe limits");
     }
 
+    /** Every id of the HTML is unique (HTML Living Standard: an id is unique in its tree), links reach one each. */
+    @Test
+    void htmlIdsAreUniqueAndEveryContentsLinkHasItsTarget() throws IOException {
+        String html = read("TMK3-spec.html");
+        java.util.Set<String> ids = new java.util.HashSet<>();
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile(" id=\"([^\"]+)\"").matcher(html);
+        while (m.find()) {
+            assertTrue(ids.add(m.group(1)), "duplicate id " + m.group(1));
+        }
+        java.util.regex.Matcher a = java.util.regex.Pattern.compile("href=\"#([^\"]+)\"").matcher(html);
+        int links = 0;
+        while (a.find()) {
+            links++;
+            assertTrue(ids.contains(a.group(1)), "link to a missing id " + a.group(1));
+        }
+        assertTrue(links > 20, "contents links: " + links);
+    }
+
     @Test
     void pdfOpensWithTitleFieldPagesAndText() throws IOException {
         try (PDDocument pdf = Loader.loadPDF(dir.resolve("TMK3-spec.pdf").toFile())) {

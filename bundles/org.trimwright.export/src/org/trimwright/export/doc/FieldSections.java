@@ -48,7 +48,8 @@ public final class FieldSections {
 
     /** Anchor of a field's appendix table. */
     public static String appendixId(ExportedField f) {
-        return Markup.anchor("steps-" + f.path());
+        // not "steps-": that is the anchor of the step table section in the field's chapter
+        return Markup.anchor("appendix-steps-" + f.path());
     }
 
     /** True when the field's step table is summarised and printed in full in the appendix. */
