@@ -22,6 +22,7 @@ import org.trimwright.export.csv.TestTables;
 import org.trimwright.export.doc.DocumentPlan;
 import org.trimwright.export.doc.HtmlDocument;
 import org.trimwright.export.doc.PdfDocument;
+import org.trimwright.export.doc.Section;
 import org.trimwright.export.doc.SharedSections;
 import org.trimwright.export.header.CHeader;
 import org.trimwright.export.ipxact.IpXactComponent;
@@ -74,18 +75,12 @@ public final class SpecExport {
             ExportProgress progress) throws IOException {
         Files.createDirectories(dir);
         Set<ExportFormat> formats = options.formats();
-        int n = 0;
-        for (var b : spec.getBlocks()) {
-            for (var r : b.getRegisters()) {
-                n += r.getFields().size();
-            }
-        }
-        int docSteps = (formats.contains(ExportFormat.HTML) ? 1 : 0) + (formats.contains(ExportFormat.PDF) ? 1 : 0);
+        int n = fieldCount(spec);
+        int docSteps = documentCount(formats);
         int total = n * (1 + docSteps + (formats.contains(ExportFormat.CSV) ? 1 : 0)) + spec.getBlocks().size() + 2;
         Counter count = new Counter(progress, total);
         SpecDigest analysed = SpecDigest.analysed(spec, options, cache, count::fromDigest, total);
         count.advance(n);
-        int fields = n;
         String chip = CNames.identifier(spec.getName());
         List<Path> files = new ArrayList<>();
         // one thread per document, and one that runs the validation and then starts the documents (the problem
@@ -99,7 +94,7 @@ public final class SpecExport {
         try {
             Future<Started> started = docThreads.submit(() -> {
                 SpecDigest full = analysed.withProblems(options, cache);
-                return new Started(full, documents(full, dir, options, chip, fields, count, docThreads, shared));
+                return new Started(full, documents(full, dir, options, chip, n, count, docThreads, shared));
             });
             others(spec, dir, analysed, formats, chip, files, count);
             Started s = await(started);
@@ -122,53 +117,74 @@ public final class SpecExport {
     private record Started(SpecDigest digest, List<Future<Path>> documents) {
     }
 
+    private static int fieldCount(ChipSpec spec) {
+        int n = 0;
+        for (var b : spec.getBlocks()) {
+            for (var r : b.getRegisters()) {
+                n += r.getFields().size();
+            }
+        }
+        return n;
+    }
+
+    /** How many of the two documents (HTML, PDF) are requested. */
+    private static int documentCount(Set<ExportFormat> formats) {
+        return (formats.contains(ExportFormat.HTML) ? 1 : 0) + (formats.contains(ExportFormat.PDF) ? 1 : 0);
+    }
+
     /** Starts the HTML and PDF writers (those requested) on {@code threads}, sharing one stream of sections. */
     private static List<Future<Path>> documents(SpecDigest digest, Path dir, ExportOptions options, String chip, int n,
             Counter count, ExecutorService threads, AtomicReference<SharedSections> shared) {
         Set<ExportFormat> formats = options.formats();
-        int docSteps = (formats.contains(ExportFormat.HTML) ? 1 : 0) + (formats.contains(ExportFormat.PDF) ? 1 : 0);
         List<Future<Path>> documents = new ArrayList<>();
-        if (docSteps == 0) {
+        if (documentCount(formats) == 0) {
             return documents;
         }
         DocumentPlan plan = new DocumentPlan(digest, options.date());
         int sections = countSections(plan);
-        SharedSections feed = new SharedSections(plan.sections(), docSteps, SECTION_WINDOW);
+        SharedSections feed = new SharedSections(plan.sections(), documentCount(formats), SECTION_WINDOW);
         shared.set(feed);
-        int reader = 0;
         if (formats.contains(ExportFormat.HTML)) {
-            Path p = dir.resolve(chip + "-spec.html");
-            Runnable tick = count.per(sections, n);
-            int me = reader++;
-            documents.add(threads.submit(() -> {
-                count.say("writing " + p.getFileName());
-                // large writes: the HTML of a big spec is hundreds of megabytes
-                try (Writer w = new java.io.OutputStreamWriter(new BufferedOutputStream(Files.newOutputStream(p),
-                        1 << 20), StandardCharsets.UTF_8)) {
-                    HtmlDocument.write(plan, feed.reader(me), w, tick);
-                } finally {
-                    feed.leave(me);
-                }
-                return p;
-            }));
+            documents.add(writer(threads, feed, documents.size(), dir.resolve(chip + "-spec.html"),
+                    count.per(sections, n), count, (in, out, tick) -> {
+                        Writer w = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
+                        HtmlDocument.write(plan, in, w, tick);
+                        w.flush();
+                    }));
         }
         if (formats.contains(ExportFormat.PDF)) {
-            Path p = dir.resolve(chip + "-spec.pdf");
-            Runnable tick = count.per(sections, n);
-            int me = reader++;
-            documents.add(threads.submit(() -> {
-                count.say("writing " + p.getFileName());
-                try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 20)) {
-                    PdfDocument.write(plan, feed.reader(me), o, tick);
-                } catch (com.lowagie.text.DocumentException e) {
-                    throw new IOException("PDF: " + e.getMessage(), e);
-                } finally {
-                    feed.leave(me);
-                }
-                return p;
-            }));
+            documents.add(writer(threads, feed, documents.size(), dir.resolve(chip + "-spec.pdf"),
+                    count.per(sections, n), count, (in, out, tick) -> {
+                        try {
+                            PdfDocument.write(plan, in, out, tick);
+                        } catch (com.lowagie.text.DocumentException e) {
+                            throw new IOException("PDF: " + e.getMessage(), e);
+                        }
+                    }));
         }
         return documents;
+    }
+
+    /** Writes one document from a stream of sections. */
+    private interface DocumentWriter {
+        void write(Iterable<Section> sections, OutputStream out, Runnable tick) throws IOException;
+    }
+
+    /**
+     * Starts writer {@code reader} of {@code feed} into file {@code p} on {@code threads} (1 MB writes: the documents
+     * of a big spec are hundreds of megabytes); the writer leaves the feed however it ends.
+     */
+    private static Future<Path> writer(ExecutorService threads, SharedSections feed, int reader, Path p,
+            Runnable tick, Counter count, DocumentWriter body) {
+        return threads.submit(() -> {
+            count.say("writing " + p.getFileName());
+            try (OutputStream o = new BufferedOutputStream(Files.newOutputStream(p), 1 << 20)) {
+                body.write(feed.reader(reader), o, tick);
+            } finally {
+                feed.leave(reader);
+            }
+            return p;
+        });
     }
 
     private static <T> T await(Future<T> f) throws IOException {
