@@ -1,6 +1,5 @@
 package org.trimwright.export.doc;
 
-import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
 import java.text.FieldPosition;
 import java.text.NumberFormat;
@@ -67,8 +66,12 @@ final class FastTickUnits implements TickUnitSource {
     private static final Fixed[] BY_POWER = new Fixed[11];
 
     static {
+        // NumberTickUnitSource's patterns: "0.0000" .. "0.0" below 1, "#,##0" from 1 (grouping by 3), in the
+        // default format locale's symbols
+        DecimalFormatSymbols s = DecimalFormatSymbols.getInstance();
         for (int p = -4; p <= 6; p++) {
-            BY_POWER[p + 4] = Fixed.of(new DecimalFormat(p < 0 ? "0." + "0".repeat(-p) : "#,##0"));
+            BY_POWER[p + 4] = new Fixed(Math.max(0, -p), p < 0 ? 0 : 3, s.getGroupingSeparator(),
+                    s.getDecimalSeparator(), s.getMinusSign());
         }
     }
 
@@ -94,23 +97,6 @@ final class FastTickUnits implements TickUnitSource {
             this.grouping = grouping;
             this.point = point;
             this.minus = minus;
-        }
-
-        /** The fast equivalent of {@code f}, or null when {@code f} is not a plain fixed-point pattern. */
-        static Fixed of(NumberFormat f) {
-            if (!(f instanceof DecimalFormat d)) {
-                return null;
-            }
-            String p = d.toPattern();
-            int decimals = d.getMaximumFractionDigits();
-            if (!p.matches("[#,0]*0(\\.0{1,4})?") || decimals != d.getMinimumFractionDigits() || decimals > 4
-                    || d.getMultiplier() != 1 || d.getMinimumIntegerDigits() != 1) {
-                return null;
-            }
-            DecimalFormatSymbols s = d.getDecimalFormatSymbols();
-            int groupingSize = d.isGroupingUsed() ? d.getGroupingSize() : 0;
-            return new Fixed(decimals, groupingSize, s.getGroupingSeparator(), s.getDecimalSeparator(),
-                    s.getMinusSign());
         }
 
         @Override
