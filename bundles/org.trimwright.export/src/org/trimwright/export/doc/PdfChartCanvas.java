@@ -9,7 +9,6 @@ import java.awt.Paint;
 import java.awt.RenderingHints;
 import java.awt.Shape;
 import java.awt.Stroke;
-import java.awt.font.FontRenderContext;
 import java.awt.geom.AffineTransform;
 import java.awt.geom.PathIterator;
 import java.awt.geom.Rectangle2D;
@@ -17,6 +16,7 @@ import java.util.HashMap;
 import java.util.Map;
 
 import org.trimwright.export.picture.ClipState;
+import org.trimwright.export.picture.RecordingGraphics;
 
 import com.lowagie.text.pdf.BaseFont;
 import com.lowagie.text.pdf.PdfContentByte;
@@ -32,8 +32,8 @@ import com.lowagie.text.pdf.PdfGState;
  * Why: {@code PdfGraphics2D} keeps a second, full Java 2D state per chart and re-derives fonts, clips and strokes on
  * every call, which made it the most expensive step of the PDF; painting a recorded picture needs none of that. The
  * output follows {@code PdfGraphics2D}'s conventions: y flipped to PDF space, the clip applied in a saved graphics
- * state, text spread by character spacing to the width the chart layout measured, bold type simulated by stroking the glyph outlines with a line of size / 30 (the weight formula
- * {@code PdfGraphics2D} uses).
+ * state, text spread by character spacing to the width the chart layout measured, bold type simulated by stroking
+ * the glyph outlines with a line of size / 30 (the weight formula {@code PdfGraphics2D} uses).
  */
 final class PdfChartCanvas extends UnsupportedGraphics {
 
@@ -66,8 +66,6 @@ final class PdfChartCanvas extends UnsupportedGraphics {
      * widths of strings as the chart layout measured them. Use on the document's thread only.
      */
     static final class Shared {
-        /** Measurement as the chart layout does it (fractional metrics, see RecordingGraphics). */
-        private static final FontRenderContext LAYOUT = new FontRenderContext(null, false, true);
         private static final int MAX_WIDTHS = 8192;
 
         final BaseFont font;
@@ -89,7 +87,7 @@ final class PdfChartCanvas extends UnsupportedGraphics {
                     cached = 0;
                     byText = widths.computeIfAbsent(f, k -> new HashMap<>());
                 }
-                w = (float) f.getStringBounds(s, LAYOUT).getWidth();
+                w = (float) f.getStringBounds(s, RecordingGraphics.layoutContext()).getWidth();
                 byText.put(s, w);
                 cached++;
             }

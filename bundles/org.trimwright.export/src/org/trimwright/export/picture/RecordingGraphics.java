@@ -91,6 +91,14 @@ public final class RecordingGraphics extends Graphics2D {
 
     private final boolean mergeLines;
 
+    /**
+     * How a recorded layout measured text (on this thread): painters that set text in another font use it to spread
+     * the text to the measured width.
+     */
+    public static FontRenderContext layoutContext() {
+        return METRICS.get().getFontRenderContext();
+    }
+
     /** A recorder for a drawing area of {@code width} x {@code height} (kept in the picture; not a clip). */
     public RecordingGraphics(double width, double height) {
         this(width, height, false);
